@@ -1,0 +1,86 @@
+import express from 'express';
+import path from 'node:path';
+import fs from 'node:fs';
+import helmet from 'helmet';
+import { toNodeHandler } from 'better-auth/node';
+import type { Db } from './db/client';
+import type { Auth } from './lib/auth';
+import type { Mailer } from './lib/mail';
+import { apiNotFound, errorMiddleware } from './lib/errors';
+import { loadUser } from './lib/session';
+import { sameOriginOnly } from './lib/same-origin';
+import { catalogueRoutes } from './modules/slabs/catalogue.routes';
+import { accountRoutes } from './modules/accounts/accounts.routes';
+
+export type AppDeps = {
+  db: Db;
+  auth: Auth;
+  mailer: Mailer;
+  uploadsDir: string;
+  /** Built client to serve (production); omitted in dev and API tests. */
+  clientDir?: string;
+  /** Origins allowed to send state-changing requests (the public URL). */
+  trustedOrigins?: string[];
+};
+
+export function createApp(deps: AppDeps) {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          fontSrc: ["'self'", 'data:'],
+          scriptSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+    }),
+  );
+
+  // The auth library parses its own bodies, so it is mounted before express.json().
+  app.all('/api/auth/{*any}', toNodeHandler(deps.auth));
+  app.use(express.json({ limit: '100kb' }));
+
+  const api = express.Router();
+  api.use(sameOriginOnly(deps.trustedOrigins ?? []));
+  api.use(loadUser(deps.auth));
+  api.get('/health', (_req, res) => { res.json({ ok: true }); });
+  api.use(catalogueRoutes(deps));
+  api.use(accountRoutes(deps));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  app.use(
+    '/uploads',
+    express.static(path.resolve(deps.uploadsDir), {
+      maxAge: '365d',
+      immutable: true,
+      index: false,
+      dotfiles: 'deny',
+      setHeaders: (res) => {
+        res.setHeader('X-Content-Type-Options', 'nosniff');
+        res.setHeader('Content-Security-Policy', "default-src 'none'; sandbox");
+      },
+    }),
+  );
+
+  if (deps.clientDir && fs.existsSync(deps.clientDir)) {
+    const clientDir = path.resolve(deps.clientDir);
+    app.use('/assets', express.static(path.join(clientDir, 'assets'), { maxAge: '365d', immutable: true }));
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    // Client-side routes: every other GET gets the app shell.
+    app.get('/{*any}', (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+  }
+
+  app.use(errorMiddleware);
+  return app;
+}

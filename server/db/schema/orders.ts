@@ -1,0 +1,71 @@
+import { sql } from 'drizzle-orm';
+import {
+  boolean, date, doublePrecision, index, integer, jsonb, pgTable, serial, text, timestamp, uniqueIndex,
+} from 'drizzle-orm/pg-core';
+import { user } from './auth';
+import { slabs } from './slabs';
+import { pickupWindows } from './pickups';
+
+export const orders = pgTable('orders', {
+  id: serial('id').primaryKey(),
+  code: text('code').notNull().unique(),
+  buyerId: text('buyer_id').notNull().references(() => user.id),
+  // pending-payment | paid | picked-up | no-show | refunded | cancelled
+  status: text('status').notNull(),
+  slabsCents: integer('slabs_cents').notNull(),
+  servicesCents: integer('services_cents').notNull().default(0),
+  totalCents: integer('total_cents').notNull(),
+  refundedCents: integer('refunded_cents').notNull().default(0),
+  totalWeightLb: doublePrecision('total_weight_lb').notNull(),
+  longestSlabIn: doublePrecision('longest_slab_in').notNull(),
+  loadingHelp: boolean('loading_help').notNull().default(false),
+  pickupWindowId: integer('pickup_window_id').references(() => pickupWindows.id),
+  pickupOn: date('pickup_on', { mode: 'string' }),
+  idempotencyKey: text('idempotency_key').notNull().unique(),
+  chargeId: text('charge_id'),
+  disputed: boolean('disputed').notNull().default(false),
+  reminderSentAt: timestamp('reminder_sent_at', { withTimezone: true }),
+  pickedUpAt: timestamp('picked_up_at', { withTimezone: true }),
+  pickedUpBy: text('picked_up_by'),
+  createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  paidAt: timestamp('paid_at', { withTimezone: true }),
+}, (t) => [
+  index('orders_buyer_idx').on(t.buyerId),
+  index('orders_pickup_idx').on(t.pickupOn, t.pickupWindowId),
+]);
+
+export const orderLines = pgTable('order_lines', {
+  id: serial('id').primaryKey(),
+  orderId: integer('order_id').notNull().references(() => orders.id, { onDelete: 'cascade' }),
+  slabId: integer('slab_id').notNull().references(() => slabs.id),
+  // sold | refunded
+  status: text('status').notNull().default('sold'),
+  slabCode: text('slab_code').notNull(),
+  speciesName: text('species_name').notNull(),
+  boardFeet: doublePrecision('board_feet').notNull(),
+  weightLb: doublePrecision('weight_lb').notNull(),
+  lengthIn: doublePrecision('length_in').notNull(),
+  /** Snapshot of the price breakdown shown to the buyer at checkout. */
+  priceBreakdown: jsonb('price_breakdown').$type<unknown>().notNull(),
+  withFlattening: boolean('with_flattening').notNull().default(false),
+  slabCents: integer('slab_cents').notNull(),
+  servicesCents: integer('services_cents').notNull().default(0),
+  totalCents: integer('total_cents').notNull(),
+}, (t) => [
+  // A slab is one of a kind: at most one sold line can exist for it.
+  uniqueIndex('order_lines_one_sale_per_slab').on(t.slabId).where(sql`${t.status} = 'sold'`),
+  index('order_lines_order_idx').on(t.orderId),
+]);
+
+export const payments = pgTable('payments', {
+  id: serial('id').primaryKey(),
+  orderId: integer('order_id').notNull().references(() => orders.id, { onDelete: 'cascade' }),
+  kind: text('kind').notNull(), // charge | refund
+  providerId: text('provider_id'),
+  amountCents: integer('amount_cents').notNull(),
+  status: text('status').notNull(), // succeeded | failed
+  reason: text('reason').notNull().default(''),
+  idempotencyKey: text('idempotency_key').unique(),
+  createdBy: text('created_by'),
+  createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+}, (t) => [index('payments_order_idx').on(t.orderId)]);

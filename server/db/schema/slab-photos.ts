@@ -1,0 +1,16 @@
+import { boolean, index, integer, pgTable, serial, text, timestamp } from 'drizzle-orm/pg-core';
+import { slabs } from './slabs';
+
+export const slabPhotos = pgTable('slab_photos', {
+  id: serial('id').primaryKey(),
+  slabId: integer('slab_id').notNull().references(() => slabs.id, { onDelete: 'cascade' }),
+  /** Random, server-chosen base name; files are <key>-display.webp and <key>-thumb.webp. */
+  fileKey: text('file_key').notNull().unique(),
+  width: integer('width').notNull(),
+  height: integer('height').notNull(),
+  position: integer('position').notNull().default(0),
+  isCover: boolean('is_cover').notNull().default(false),
+  isIllustration: boolean('is_illustration').notNull().default(false),
+  altText: text('alt_text').notNull().default(''),
+  createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+}, (t) => [index('slab_photos_slab_idx').on(t.slabId)]);

@@ -1,0 +1,37 @@
+import { z } from 'zod';
+
+const port = z.coerce.number().int().min(0).max(65535);
+
+/** Every setting the server reads from the environment; see .env.example. Bad config refuses to start. */
+export const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  PORT: port.default(3000),
+  HOST: z.string().default('127.0.0.1'),
+  PUBLIC_URL: z.url().optional(),
+  DATA_DIR: z.string().default('data'),
+  DATABASE_URL: z.string().optional(),
+  UPLOADS_DIR: z.string().default('uploads'),
+  BETTER_AUTH_SECRET: z.string().min(32).optional(),
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: port.optional(),
+  MAIL_FROM: z.string().default('Stickerline <yard@stickerline.test>'),
+  MAILDEV_WEB_PORT: port.optional(),
+  START_LOCAL_FAKES: z.enum(['true', 'false']).optional(),
+  STRIPE_SECRET_KEY: z.string().default('sk_test_local_fake'),
+  STRIPE_HOST: z.string().optional(),
+  STRIPE_PORT: port.optional(),
+  STRIPE_PROTOCOL: z.enum(['http', 'https']).optional(),
+  STRIPE_WEBHOOK_SECRET: z.string().default('whsec_local_development_only'),
+  SEED_DEMO: z.enum(['true', 'false']).default('true'),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const parsed = envSchema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
+    throw new Error(`Stickerline refuses to start: bad configuration\n${lines.join('\n')}`);
+  }
+  return parsed.data;
+}

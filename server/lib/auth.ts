@@ -1,0 +1,66 @@
+import { betterAuth } from 'better-auth';
+import { drizzleAdapter } from 'better-auth/adapters/drizzle';
+import { admin } from 'better-auth/plugins/admin';
+import { adminAc, defaultAc, userAc } from 'better-auth/plugins/admin/access';
+import type { Db } from '../db/client';
+import * as schema from '../db/schema/index';
+import type { Mailer } from './mail';
+import { passwordResetEmail } from './email-templates';
+
+export const ROLES = ['buyer', 'seller', 'admin'] as const;
+export type Role = (typeof ROLES)[number];
+
+export type AuthOptions = {
+  db: Db;
+  secret: string;
+  baseURL: string;
+  mailer: Mailer;
+  /** Sign-in/sign-up attempts per minute per address; tests lower or raise it. */
+  signInLimitPerMinute?: number;
+};
+
+export function createAuth({ db, secret, baseURL, mailer, signInLimitPerMinute = 10 }: AuthOptions) {
+  return betterAuth({
+    appName: 'Stickerline',
+    secret,
+    baseURL,
+    basePath: '/api/auth',
+    trustedOrigins: [baseURL],
+    database: drizzleAdapter(db, { provider: 'pg', schema }),
+    emailAndPassword: {
+      enabled: true,
+      minPasswordLength: 10,
+      maxPasswordLength: 128,
+      revokeSessionsOnPasswordReset: true,
+      sendResetPassword: async ({ user, url }) => {
+        await mailer.send({ to: user.email, ...passwordResetEmail({ name: user.name, url }) });
+      },
+    },
+    plugins: [
+      admin({
+        ac: defaultAc,
+        roles: { buyer: userAc, seller: userAc, admin: adminAc },
+        defaultRole: 'buyer',
+        adminRoles: ['admin'],
+      }),
+    ],
+    advanced: {
+      useSecureCookies: baseURL.startsWith('https://'),
+      defaultCookieAttributes: { httpOnly: true, sameSite: 'lax' },
+    },
+    rateLimit: {
+      enabled: true,
+      window: 60,
+      max: 100,
+      storage: 'memory',
+      customRules: {
+        '/sign-in/email': { window: 60, max: signInLimitPerMinute },
+        '/sign-up/email': { window: 60, max: signInLimitPerMinute },
+        '/request-password-reset': { window: 60, max: 5 },
+      },
+    },
+    telemetry: { enabled: false },
+  });
+}
+
+export type Auth = ReturnType<typeof createAuth>;

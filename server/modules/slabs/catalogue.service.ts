@@ -1,0 +1,85 @@
+import type { Tx } from '../../db/client';
+import { AppError, notFound, validationError, zodFieldErrors } from '../../lib/errors';
+import { parseSlabListQuery, PUBLIC_STATUSES, type SlabDetail, type SlabListItem, type SlabListResponse, type SlabStatus } from '../../../shared/slabs';
+import { photoUrls } from '../../../shared/photos';
+import {
+  airDryReadyDate, DEFAULT_AIR_DRY_MC, lifting, roundBoardFeet, slabPriceBreakdown, slabWeightLb,
+} from '../../../shared/wood/index';
+import { loadPricingRules } from '../pricing/pricing.service';
+import { readMillSettings } from '../pricing/pricing.repo';
+import * as repo from './catalogue.repo';
+
+const thumb = (key: string | null) => (key ? photoUrls(key).thumbUrl : null);
+const display = (key: string | null) => (key ? photoUrls(key).displayUrl : null);
+const round1 = (n: number) => Math.round(n * 10) / 10;
+
+export async function listSlabs(db: Tx, rawQuery: Record<string, unknown>): Promise<SlabListResponse> {
+  const parsed = parseSlabListQuery(rawQuery);
+  if (!parsed.success) throw validationError(zodFieldErrors(parsed.error), 'Some filters are not valid.');
+  const query = parsed.data;
+  const { rows, total } = await repo.findSlabPage(db, query);
+  const items: SlabListItem[] = rows.map((r) => ({
+    id: r.id, code: r.code, species: { slug: r.speciesSlug, name: r.speciesName },
+    thicknessIn: r.thicknessIn, widthIn: round1(r.widthIn), lengthIn: r.lengthIn,
+    boardFeet: roundBoardFeet(r.boardFeet), priceCents: r.priceCents,
+    status: r.status as SlabStatus, dryingState: r.dryingState,
+    moisturePercent: r.moisturePercent === null ? null : Number(r.moisturePercent),
+    coverPhotoUrl: display(r.coverKey), coverThumbUrl: thumb(r.coverKey),
+    liveEdge: r.liveEdge as SlabListItem['liveEdge'], figures: r.figures, logId: r.logId, sequenceInLog: r.sequenceInLog,
+  }));
+  return { items, total, page: query.page, pageSize: query.pageSize };
+}
+
+export function parseId(raw: string): number {
+  const id = Number(raw);
+  if (!Number.isInteger(id) || id <= 0 || id > 2_147_483_647) throw new AppError(404, 'not_found', 'That slab was not found.');
+  return id;
+}
+
+/** The full slab as a buyer sees it; staff (`includeHidden`) also see withdrawn slabs. */
+export async function getSlabDetail(db: Tx, id: number, { includeHidden = false } = {}): Promise<SlabDetail> {
+  const found = await repo.findSlabWithLog(db, id);
+  if (!found || (!includeHidden && !PUBLIC_STATUSES.includes(found.slab.status as SlabStatus))) throw notFound('That slab');
+  const { slab, species, log } = found;
+  const [photos, readings, sequence, rules, settings] = await Promise.all([
+    repo.findPhotos(db, id), repo.findReadings(db, id), repo.findLogSequence(db, log.id),
+    loadPricingRules(db), readMillSettings(db),
+  ]);
+  const latest = readings.at(-1) ?? null;
+  const weightAtMcPercent = latest?.mcPercent ?? DEFAULT_AIR_DRY_MC;
+  const weightLb = slabWeightLb({ speciesSlug: species.slug, thicknessIn: slab.thicknessIn, widthIn: slab.widthIn, lengthIn: slab.lengthIn, mcPercent: weightAtMcPercent });
+  const priceInput = {
+    thicknessIn: slab.thicknessIn, widthIn: slab.widthIn, lengthIn: slab.lengthIn,
+    ratePerBoardFootCents: species.ratePerBoardFootCents, figures: slab.figures,
+    overrideCents: slab.priceOverrideCents, overrideReason: slab.priceOverrideReason, rules,
+  };
+  const priceBreakdown = slabPriceBreakdown(priceInput);
+  const withFlattening = slabPriceBreakdown({ ...priceInput, withFlattening: true });
+  return {
+    id: slab.id, code: slab.code,
+    species: { slug: species.slug, name: species.name, botanicalName: species.botanicalName, ratePerBoardFootCents: species.ratePerBoardFootCents },
+    thicknessIn: slab.thicknessIn, widthIn: round1(slab.widthIn), widthsIn: slab.widthsIn, lengthIn: slab.lengthIn,
+    boardFeet: roundBoardFeet(slab.boardFeet), priceCents: slab.priceCents,
+    status: slab.status as SlabStatus, dryingState: slab.dryingState,
+    moisturePercent: latest?.mcPercent ?? null,
+    coverPhotoUrl: display(photos[0]?.fileKey ?? null), coverThumbUrl: thumb(photos[0]?.fileKey ?? null),
+    liveEdge: slab.liveEdge as SlabDetail['liveEdge'], figures: slab.figures, figureNotes: slab.figureNotes,
+    defects: slab.defects, description: slab.description, yardStack: slab.yardStack, yardPosition: slab.yardPosition,
+    priceOverrideReason: slab.priceOverrideReason,
+    createdAt: slab.createdAt.toISOString(), listedAt: slab.listedAt?.toISOString() ?? null,
+    logId: log.id, sequenceInLog: slab.sequenceInLog,
+    log: { id: log.id, code: log.code, originNote: log.originNote, felledOn: log.felledOn, milledOn: log.milledOn, sawingMethod: log.sawingMethod, lengthIn: log.lengthIn },
+    photos: photos.map((p) => ({ id: p.id, ...photoUrls(p.fileKey), width: p.width, height: p.height, isCover: p.isCover, isIllustration: p.isIllustration, altText: p.altText, position: p.position })),
+    moistureReadings: readings.map((r) => ({ id: r.id, measuredOn: r.measuredOn, mcPercent: r.mcPercent, meterKind: r.meterKind, location: r.location, depthIn: r.depthIn, ambientTempF: r.ambientTempF, ambientRhPercent: r.ambientRhPercent })),
+    neighbours: sequence
+      .filter((n) => includeHidden || PUBLIC_STATUSES.includes(n.status as SlabStatus))
+      .map((n) => ({ ...n, status: n.status as SlabStatus, coverThumbUrl: thumb(n.coverKey), isThisSlab: n.id === slab.id, coverKey: undefined })),
+    priceBreakdown,
+    weightLb: Math.round(weightLb),
+    weightAtMcPercent,
+    lifting: lifting({ weightLb }),
+    airDryReadyOn: log.milledOn ? airDryReadyDate({ milledOn: log.milledOn, thicknessIn: slab.thicknessIn }).toISOString().slice(0, 10) : null,
+    targetMcPercent: settings?.targetMcPercent ?? 8,
+    flatteningPriceCents: withFlattening.flatteningCents,
+  };
+}

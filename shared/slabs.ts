@@ -1,0 +1,142 @@
+import { z } from 'zod';
+
+export const SLAB_STATUSES = ['drying', 'ready', 'listed', 'held', 'sold', 'picked-up', 'withdrawn'] as const;
+export type SlabStatus = (typeof SLAB_STATUSES)[number];
+
+/** Statuses a visitor can see in the catalogue and on a slab page. */
+export const PUBLIC_STATUSES: readonly SlabStatus[] = ['drying', 'ready', 'listed', 'held', 'sold', 'picked-up'];
+
+export const AVAILABILITY = {
+  available: ['listed', 'held'],
+  upcoming: ['drying', 'ready'],
+  all: ['drying', 'ready', 'listed', 'held'],
+} as const satisfies Record<string, readonly SlabStatus[]>;
+
+export const LIVE_EDGE = ['none', 'one', 'both'] as const;
+export const LIVE_EDGE_LABELS: Record<(typeof LIVE_EDGE)[number], string> = {
+  none: 'Square edges',
+  one: 'Live edge, one side',
+  both: 'Live edge, both sides',
+};
+
+export const SAWING_METHODS = ['flatsawn', 'quartersawn', 'through-and-through', 'live-edge-slabbing'] as const;
+export const METER_KINDS = ['pin', 'pinless', 'oven-dry'] as const;
+
+export const SLAB_SORTS = ['newest', 'price-asc', 'price-desc', 'board-feet-desc', 'board-feet-asc'] as const;
+export const SLAB_SORT_LABELS: Record<(typeof SLAB_SORTS)[number], string> = {
+  newest: 'Newest first',
+  'price-asc': 'Price, low to high',
+  'price-desc': 'Price, high to low',
+  'board-feet-desc': 'Most board feet',
+  'board-feet-asc': 'Fewest board feet',
+};
+
+const DRYING_STATE_VALUES = ['green', 'air-drying', 'air-dry', 'shop-dry'] as const;
+
+const optionalNumber = (label: string, min: number, max: number) =>
+  z.coerce
+    .number({ error: `${label} must be a number` })
+    .min(min, `${label} must be at least ${min}`)
+    .max(max, `${label} must be at most ${max}`)
+    .optional();
+
+const emptyToUndefined = (v: unknown) => (v === '' ? undefined : v);
+
+/** Catalogue query: every value arrives as a string from the URL. */
+export const slabListQuerySchema = z
+  .object({
+    species: z.string().regex(/^[a-z0-9-]{1,60}$/, 'Unknown species').optional(),
+    minThicknessIn: optionalNumber('Minimum thickness', 0, 48),
+    maxThicknessIn: optionalNumber('Maximum thickness', 0, 48),
+    minLengthIn: optionalNumber('Minimum length', 0, 1200),
+    minWidthIn: optionalNumber('Minimum width', 0, 240),
+    maxPriceCents: z.coerce.number({ error: 'Maximum price must be a number' }).int('Maximum price must be whole cents').min(0, 'Maximum price cannot be negative').max(100_000_000).optional(),
+    liveEdge: z.enum(['any', ...['none', 'one', 'both', 'yes']] as const, { error: 'Live edge must be any, none, one, both or yes' }).optional(),
+    dryingState: z.enum(DRYING_STATE_VALUES, { error: `Drying state must be one of ${DRYING_STATE_VALUES.join(', ')}` }).optional(),
+    availability: z.enum(['available', 'upcoming', 'all'], { error: 'Availability must be available, upcoming or all' }).default('available'),
+    logId: z.coerce.number().int().positive().optional(),
+    q: z.string().max(80, 'Search text is too long').optional(),
+    sort: z.enum(SLAB_SORTS, { error: `Sort must be one of ${SLAB_SORTS.join(', ')}` }).default('newest'),
+    page: z.coerce.number({ error: 'Page must be a number' }).int('Page must be a whole number').min(1, 'Page starts at 1').max(100000).default(1),
+    pageSize: z.coerce.number({ error: 'Page size must be a number' }).int('Page size must be a whole number').min(1, 'Page size must be 1–100').max(100, 'Page size must be 1–100').default(24),
+  })
+  .strict()
+  .refine((q) => q.minThicknessIn === undefined || q.maxThicknessIn === undefined || q.minThicknessIn <= q.maxThicknessIn, {
+    path: ['maxThicknessIn'],
+    message: 'Maximum thickness must not be less than the minimum',
+  });
+
+/** Accepts raw URL params: empty strings are treated as absent. */
+export function parseSlabListQuery(raw: Record<string, unknown>) {
+  const cleaned = Object.fromEntries(Object.entries(raw).map(([k, v]) => [k, emptyToUndefined(v)]));
+  return slabListQuerySchema.safeParse(cleaned);
+}
+
+export type SlabListQuery = z.infer<typeof slabListQuerySchema>;
+
+export type SpeciesRef = { slug: string; name: string };
+
+export type SlabListItem = {
+  id: number;
+  code: string;
+  species: SpeciesRef;
+  thicknessIn: number;
+  widthIn: number;
+  lengthIn: number;
+  boardFeet: number;
+  priceCents: number;
+  status: SlabStatus;
+  dryingState: string;
+  moisturePercent: number | null;
+  coverPhotoUrl: string | null;
+  coverThumbUrl: string | null;
+  liveEdge: (typeof LIVE_EDGE)[number];
+  figures: string[];
+  logId: number;
+  sequenceInLog: number;
+};
+
+export type SlabListResponse = { items: SlabListItem[]; total: number; page: number; pageSize: number };
+
+export type PriceLine = { code: string; label: string; amountCents: number };
+export type PriceBreakdownView = { boardFeet: number; lines: PriceLine[]; slabCents: number; flatteningCents: number; totalCents: number };
+
+export type SlabPhotoView = {
+  id: number; displayUrl: string; thumbUrl: string; width: number; height: number;
+  isCover: boolean; isIllustration: boolean; altText: string; position: number;
+};
+
+export type MoistureReadingView = {
+  id: number; measuredOn: string; mcPercent: number; meterKind: string; location: string;
+  depthIn: number | null; ambientTempF: number | null; ambientRhPercent: number | null;
+};
+
+export type LogNeighbour = {
+  id: number; code: string; sequenceInLog: number; status: SlabStatus; thicknessIn: number;
+  widthIn: number; lengthIn: number; priceCents: number; coverThumbUrl: string | null; isThisSlab: boolean;
+};
+
+export type SlabDetail = Omit<SlabListItem, 'species'> & {
+  species: SpeciesRef & { botanicalName: string; ratePerBoardFootCents: number };
+  widthsIn: number[];
+  figureNotes: string;
+  defects: { kind: string; note: string }[];
+  description: string;
+  yardStack: string;
+  yardPosition: string;
+  priceOverrideReason: string | null;
+  createdAt: string;
+  listedAt: string | null;
+  log: { id: number; code: string; originNote: string; felledOn: string | null; milledOn: string | null; sawingMethod: string; lengthIn: number };
+  photos: SlabPhotoView[];
+  moistureReadings: MoistureReadingView[];
+  neighbours: LogNeighbour[];
+  priceBreakdown: PriceBreakdownView;
+  /** Estimated weight at the latest reading (or at the mill's air-dry assumption when none). */
+  weightLb: number;
+  weightAtMcPercent: number;
+  lifting: { peopleNeeded: number; needsEquipment: boolean; message: string };
+  airDryReadyOn: string | null;
+  targetMcPercent: number;
+  flatteningPriceCents: number;
+};
