@@ -1,7 +1,7 @@
 import { betterAuth } from 'better-auth';
 import { drizzleAdapter } from 'better-auth/adapters/drizzle';
 import { admin } from 'better-auth/plugins/admin';
-import { adminAc, defaultAc, userAc } from 'better-auth/plugins/admin/access';
+import { adminAc, userAc } from 'better-auth/plugins/admin/access';
 import type { Db } from '../db/client';
 import * as schema from '../db/schema/index';
 import type { Mailer } from './mail';
@@ -38,7 +38,6 @@ export function createAuth({ db, secret, baseURL, mailer, signInLimitPerMinute =
     },
     plugins: [
       admin({
-        ac: defaultAc,
         roles: { buyer: userAc, seller: userAc, admin: adminAc },
         defaultRole: 'buyer',
         adminRoles: ['admin'],

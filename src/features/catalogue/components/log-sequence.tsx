@@ -1,0 +1,33 @@
+import { Link } from 'react-router';
+import type { LogNeighbour } from '../../../../shared/slabs';
+import { STATUS_LABELS } from '../../../../shared/slabs';
+import { formatCents, toSixteenths } from '../../../../shared/wood/index';
+import { paths } from '../../../paths';
+
+/**
+ * The slabs cut from the same log, in sawing order. Neighbours next to each other have
+ * mirror-image faces (book-matched) and can be paired for a table top.
+ */
+export function LogSequence({ neighbours }: { neighbours: LogNeighbour[] }) {
+  const me = neighbours.findIndex((n) => n.isThisSlab);
+  return (
+    <ol className="flex gap-2 overflow-x-auto pb-2" aria-label="Slabs from this log in sawing order">
+      {neighbours.map((n, i) => {
+        const partner = Math.abs(i - me) === 1;
+        return (
+          <li key={n.id} className={`w-36 shrink-0 rounded-md border p-2 text-sm ${n.isThisSlab ? 'border-accent bg-accent-soft' : 'border-line bg-surface-raised'}`}>
+            {n.isThisSlab ? (
+              <p className="font-semibold">No. {n.sequenceInLog} · this slab</p>
+            ) : (
+              <Link to={paths.slab(n.id)} className="font-semibold text-accent underline">No. {n.sequenceInLog} · {n.code}</Link>
+            )}
+            {n.coverThumbUrl && <img src={n.coverThumbUrl} alt="" className="my-1 h-12 w-full rounded object-cover" />}
+            <p>{toSixteenths(n.thicknessIn)}″ × {toSixteenths(n.widthIn)}″</p>
+            <p>{STATUS_LABELS[n.status]}{n.status === 'listed' ? ` · ${formatCents(n.priceCents)}` : ''}</p>
+            {partner && !n.isThisSlab && <p className="font-semibold text-moss">Book-matched partner</p>}
+          </li>
+        );
+      })}
+    </ol>
+  );
+}

@@ -1,0 +1,29 @@
+import type { SlabDetail } from '../../../../shared/slabs';
+import { LIVE_EDGE_LABELS } from '../../../../shared/slabs';
+import { formatInches } from '../../../../shared/wood/index';
+
+export function MeasurementsTable({ slab }: { slab: SlabDetail }) {
+  const rows: [string, string][] = [
+    ['Thickness', formatInches(slab.thicknessIn)],
+    ['Width, measured along the slab', slab.widthsIn.map((w) => formatInches(w)).join(' · ')],
+    ['Average width', formatInches(slab.widthIn)],
+    ['Length', `${formatInches(slab.lengthIn)} — ${(slab.lengthIn / 12).toFixed(1)} ft`],
+    ['Board feet', `${slab.boardFeet.toFixed(2)} bd ft (thickness × average width × length ÷ 144)`],
+    ['Edges', LIVE_EDGE_LABELS[slab.liveEdge]],
+    ['Figure', slab.figures.length ? `${slab.figures.join(', ')}${slab.figureNotes ? ` — ${slab.figureNotes}` : ''}` : slab.figureNotes || 'Plain'],
+    ['Defects', slab.defects.length ? slab.defects.map((d) => `${d.kind}${d.note ? ` (${d.note})` : ''}`).join('; ') : 'None noted'],
+    ['In the yard', [slab.yardStack, slab.yardPosition].filter(Boolean).join(', ') || '—'],
+  ];
+  return (
+    <table className="w-full text-left">
+      <tbody>
+        {rows.map(([k, v]) => (
+          <tr key={k} className="border-b border-line align-top">
+            <th scope="row" className="w-2/5 py-1.5 pr-3 font-semibold">{k}</th>
+            <td className="py-1.5">{v}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}

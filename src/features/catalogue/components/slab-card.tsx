@@ -1,0 +1,43 @@
+import { Link } from 'react-router';
+import { paths } from '../../../paths';
+import { STATUS_LABELS, LIVE_EDGE_LABELS, type SlabListItem } from '../../../../shared/slabs';
+import { formatCents, toSixteenths } from '../../../../shared/wood/index';
+import { Tag } from '../../../components/ui/tag';
+
+const dims = (s: Pick<SlabListItem, 'thicknessIn' | 'widthIn' | 'lengthIn'>) =>
+  `${toSixteenths(s.thicknessIn)}″ × ${toSixteenths(s.widthIn)}″ × ${toSixteenths(s.lengthIn)}″`;
+
+export function SlabCard({ slab }: { slab: SlabListItem }) {
+  const forSale = slab.status === 'listed';
+  return (
+    <li className="flex flex-col overflow-hidden rounded-lg border border-line bg-surface-raised shadow-sm">
+      <Link to={paths.slab(slab.id)} className="group flex h-full flex-col focus-visible:outline-offset-[-3px]">
+        <div className="aspect-[3/1.6] bg-surface-sunk">
+          {slab.coverThumbUrl ? (
+            <img src={slab.coverThumbUrl} alt="" loading="lazy" className="h-full w-full object-cover" />
+          ) : (
+            <div className="flex h-full items-center justify-center text-sm text-ink-soft">No photo yet</div>
+          )}
+        </div>
+        <div className="flex flex-1 flex-col gap-1 p-3">
+          <div className="flex items-baseline justify-between gap-2">
+            <h2 className="font-display text-lg font-bold group-hover:underline">{slab.species.name}</h2>
+            <span className="text-sm text-ink-soft">{slab.code}</span>
+          </div>
+          <p className="text-ink-soft" aria-label={`thickness ${slab.thicknessIn} inches, average width ${slab.widthIn} inches, length ${slab.lengthIn} inches`}>{dims(slab)}</p>
+          <p className="text-sm text-ink-soft">{LIVE_EDGE_LABELS[slab.liveEdge]}{slab.figures.length ? ` · ${slab.figures.join(', ')}` : ''}</p>
+          <div className="mt-auto flex items-end justify-between gap-2 pt-2">
+            <div>
+              <p className="text-xl font-bold text-accent-strong">{formatCents(slab.priceCents)}</p>
+              <p className="text-sm text-ink-soft">{slab.boardFeet.toFixed(2)} bd ft</p>
+            </div>
+            <div className="flex flex-col items-end gap-1">
+              <Tag tone={forSale ? 'moss' : slab.status === 'held' ? 'caution' : 'neutral'}>{STATUS_LABELS[slab.status]}</Tag>
+              {slab.moisturePercent !== null && <span className="text-sm text-ink-soft">{slab.moisturePercent.toFixed(1)} % MC</span>}
+            </div>
+          </div>
+        </div>
+      </Link>
+    </li>
+  );
+}

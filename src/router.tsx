@@ -1,0 +1,30 @@
+import { createBrowserRouter } from 'react-router';
+import { RootLayout } from './routes/root-layout';
+import { RouteError } from './routes/route-error';
+import { CatalogueRoute, catalogueLoader } from './routes/catalogue';
+import { SlabRoute, slabLoader } from './routes/slab';
+
+/**
+ * The one router. Public pages load eagerly; account, yard desk and office pages are split
+ * into their own chunks with `lazy` so buyers do not download the back office.
+ */
+export const router = createBrowserRouter([
+  {
+    path: '/',
+    element: <RootLayout />,
+    errorElement: <RootLayout />,
+    children: [
+      {
+        errorElement: <RouteError />,
+        children: [
+          { index: true, loader: catalogueLoader, element: <CatalogueRoute /> },
+          { path: 'slabs/:slabId', loader: slabLoader, element: <SlabRoute /> },
+          // --- buyer account routes (sign-in, holds, checkout, orders) ---
+          // --- yard desk (seller) routes ---
+          // --- office (admin) routes ---
+          { path: '*', loader: () => { throw new Response('Not found', { status: 404 }); } },
+        ],
+      },
+    ],
+  },
+]);
