@@ -1,0 +1,87 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Server } from 'node:http';
+import type { Env } from './env';
+import { openDatabase, migrateDatabase, type Database } from './db/client';
+import { createAuth } from './lib/auth';
+import { createMailer } from './lib/mail';
+import { startLocalFakes, type LocalFakes } from './lib/local-fakes';
+import { authSecret } from './lib/dev-secret';
+import { createApp } from './app';
+import { seedDemo } from './seed/seed-demo';
+import { startBackgroundJobs } from './jobs';
+
+export type StartOptions = { env: Env; dev?: boolean; log?: (msg: string) => void };
+
+export type Running = {
+  url: string;
+  apiPort: number;
+  fakes: LocalFakes | null;
+  database: Database;
+  stop(): Promise<void>;
+};
+
+/**
+ * Starts the whole product: local fakes (unless real services are configured), database with
+ * migrations and demo data, the API (and Vite in dev). Used by `npm start`, `npm run dev` and the
+ * browser tests.
+ */
+export async function startStickerline({ env, dev = false, log = console.log }: StartOptions): Promise<Running> {
+  const production = env.NODE_ENV === 'production';
+  fs.mkdirSync(env.DATA_DIR, { recursive: true });
+  fs.mkdirSync(env.UPLOADS_DIR, { recursive: true });
+
+  const wantFakes = env.START_LOCAL_FAKES ? env.START_LOCAL_FAKES === 'true' : !production && !env.SMTP_PORT;
+  const fakes = wantFakes ? await startLocalFakes({}) : null;
+  const smtpPort = env.SMTP_PORT ?? fakes?.smtpPort ?? 25;
+  const stripe = {
+    host: env.STRIPE_HOST ?? (fakes ? '127.0.0.1' : undefined),
+    port: env.STRIPE_PORT ?? fakes?.stripePort,
+    protocol: env.STRIPE_PROTOCOL ?? (fakes ? ('http' as const) : undefined),
+  };
+
+  const database = await openDatabase({ databaseUrl: env.DATABASE_URL, dataDir: path.join(env.DATA_DIR, 'pglite') });
+  await migrateDatabase(database);
+
+  const publicPort = env.PORT;
+  const apiPort = dev ? publicPort + 1 : publicPort;
+  const url = env.PUBLIC_URL ?? `http://localhost:${publicPort}`;
+  const mailer = createMailer({ host: env.SMTP_HOST, port: smtpPort, from: env.MAIL_FROM });
+  const auth = createAuth({ db: database.db, secret: authSecret(env.BETTER_AUTH_SECRET, env.DATA_DIR, production), baseURL: url, mailer });
+
+  if (env.SEED_DEMO === 'true') {
+    await seedDemo({ db: database.db, auth, uploadsDir: env.UPLOADS_DIR, log: (m: string) => log(`[seed] ${m}`) });
+  }
+
+  void stripe; // handed to the payments client once checkout is wired
+  const app = createApp({
+    db: database.db, auth, mailer, uploadsDir: env.UPLOADS_DIR,
+    clientDir: dev ? undefined : 'dist', trustedOrigins: [url],
+  });
+  const jobs = startBackgroundJobs({ db: database.db, mailer, publicUrl: url });
+  const server: Server = await new Promise((resolve) => {
+    const s = app.listen(apiPort, env.HOST, () => resolve(s));
+  });
+
+  let vite: { close(): Promise<void> } | null = null;
+  if (dev) {
+    process.env.API_PROXY_TARGET = `http://127.0.0.1:${apiPort}`;
+    const { createServer } = await import('vite');
+    const viteServer = await createServer({ server: { port: publicPort, host: env.HOST, strictPort: true } });
+    await viteServer.listen();
+    vite = viteServer;
+  }
+
+  return {
+    url, apiPort, fakes, database,
+    async stop() {
+      jobs.stop();
+      await vite?.close();
+      server.closeAllConnections?.();
+      await new Promise((r) => server.close(() => r(null)));
+      mailer.close();
+      await database.close();
+      await fakes?.stop();
+    },
+  };
+}
