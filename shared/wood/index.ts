@@ -1,0 +1,39 @@
+/**
+ * Stickerline wood math: the one public entry to shared/wood. Pure functions
+ * with no Node, database or UI imports, so the browser and the server share them.
+ */
+export { WoodMathError } from './errors';
+export { roundHalfAwayFromZero, roundCents } from './rounding';
+export {
+  boardFeet, roundBoardFeet, averageWidthIn, lumberTallyBoardFeet, CUBIC_INCHES_PER_BOARD_FOOT,
+  type BoardFeetInput, type LumberTallyInput,
+} from './board-feet';
+export {
+  slabPriceBreakdown, slabPriceCents, DEFAULT_PRICING_RULES,
+  type PricingRules, type PriceLine, type PriceLineCode, type SlabPriceInput, type SlabPriceBreakdown,
+} from './pricing';
+export {
+  equilibriumMoistureContent, equilibriumMoistureContentC, moistureContentPercent, FIBER_SATURATION_MC,
+  type EmcInputF, type EmcInputC, type MoistureContentInput,
+} from './moisture';
+export {
+  dimensionalChangeIn, dimensionalChangeDetail, shrinkageFromGreenPercent, COEFFICIENT_MC_RANGE,
+  type Grain, type DimensionalChangeInput, type DimensionalChangeDetail,
+} from './shrinkage';
+export {
+  slabWeightLb, woodDensityLbPerCuFt, specificGravityAtMc, WATER_DENSITY_LB_PER_CU_FT,
+  type SlabWeightInput, type WoodDensityInput,
+} from './weight';
+export {
+  airDryReadyDate, dryingStateFor, DRYING_STATES, DEFAULT_AIR_DRY_MC,
+  type DryingState, type AirDryInput, type DryingStateInput,
+} from './drying';
+export {
+  flatteningEstimate, faceAreaSqFt, DEFAULT_PASS_DEPTH_IN, DEFAULT_MIN_FINISHED_THICKNESS_IN,
+  type FlatteningInput, type FlatteningEstimate,
+} from './flattening';
+export {
+  lifting, NIOSH_LOAD_CONSTANT_LB, EQUIPMENT_ABOVE_LB, type LiftingInput, type LiftingAdvice,
+} from './lifting';
+export { SPECIES, getSpecies, type Species, type SpeciesShrinkage } from './species';
+export { toSixteenths, formatInches, formatCents, parseInches } from './format';
