@@ -11,6 +11,7 @@ import { loadUser } from './lib/session';
 import { sameOriginOnly } from './lib/same-origin';
 import { catalogueRoutes } from './modules/slabs/catalogue.routes';
 import { accountRoutes } from './modules/accounts/accounts.routes';
+import { readingRoutes } from './modules/readings/readings.routes';
 
 export type AppDeps = {
   db: Db;
@@ -56,6 +57,7 @@ export function createApp(deps: AppDeps) {
   api.get('/health', (_req, res) => { res.json({ ok: true }); });
   api.use(catalogueRoutes(deps));
   api.use(accountRoutes(deps));
+  api.use(readingRoutes(deps));
   api.use(apiNotFound);
   app.use('/api', api);
 
