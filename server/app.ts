@@ -11,6 +11,7 @@ import { loadUser } from './lib/session';
 import { sameOriginOnly } from './lib/same-origin';
 import { catalogueRoutes } from './modules/slabs/catalogue.routes';
 import { accountRoutes } from './modules/accounts/accounts.routes';
+import { officeRoutes } from './modules/office/office.routes';
 import { readingRoutes } from './modules/readings/readings.routes';
 
 export type AppDeps = {
@@ -58,6 +59,7 @@ export function createApp(deps: AppDeps) {
   api.use(catalogueRoutes(deps));
   api.use(accountRoutes(deps));
   api.use(readingRoutes(deps));
+  api.use(officeRoutes(deps));
   api.use(apiNotFound);
   app.use('/api', api);
 
