@@ -11,6 +11,8 @@ import { loadUser } from './lib/session';
 import { sameOriginOnly } from './lib/same-origin';
 import { catalogueRoutes } from './modules/slabs/catalogue.routes';
 import { accountRoutes } from './modules/accounts/accounts.routes';
+import { logRoutes } from './modules/logs/logs.routes';
+import { yardSlabRoutes } from './modules/slabs/yard-slabs.routes';
 import { officeRoutes } from './modules/office/office.routes';
 import { readingRoutes } from './modules/readings/readings.routes';
 
@@ -58,6 +60,8 @@ export function createApp(deps: AppDeps) {
   api.get('/health', (_req, res) => { res.json({ ok: true }); });
   api.use(catalogueRoutes(deps));
   api.use(accountRoutes(deps));
+  api.use(logRoutes(deps));
+  api.use(yardSlabRoutes(deps));
   api.use(readingRoutes(deps));
   api.use(officeRoutes(deps));
   api.use(apiNotFound);

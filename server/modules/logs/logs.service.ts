@@ -1,0 +1,95 @@
+import type { Db } from '../../db/client';
+import { AppError, notFound, validationError } from '../../lib/errors';
+import type { SessionUser } from '../../lib/session';
+import { createLogSchema, updateLogSchema, type LogDetail, type LogSummary } from '../../../shared/logs';
+import * as repo from './logs.repo';
+
+type LogRow = NonNullable<Awaited<ReturnType<typeof repo.findLog>>>;
+
+const toSummary = ({ log, speciesSlug, speciesName, slabCount }: LogRow): LogSummary => ({
+  id: log.id, code: log.code, species: { slug: speciesSlug, name: speciesName }, originNote: log.originNote,
+  felledOn: log.felledOn, milledOn: log.milledOn, lengthIn: log.lengthIn, buttDiameterIn: log.buttDiameterIn,
+  topDiameterIn: log.topDiameterIn, sawingMethod: log.sawingMethod as LogSummary['sawingMethod'], notes: log.notes,
+  createdAt: log.createdAt.toISOString(), slabCount: Number(slabCount),
+});
+
+export function parseLogId(raw: string): number {
+  const id = Number(raw);
+  if (!Number.isInteger(id) || id <= 0 || id > 2_147_483_647) throw notFound('That log');
+  return id;
+}
+
+export async function listLogs(db: Db): Promise<LogSummary[]> {
+  return (await repo.findLogs(db)).map(toSummary);
+}
+
+export async function getLog(db: Db, id: number): Promise<LogDetail> {
+  const row = await repo.findLog(db, id);
+  if (!row) throw notFound('That log');
+  const slabs = await repo.findLogSlabs(db, id);
+  return { ...toSummary(row), slabs: slabs.map((s) => ({ ...s, status: s.status as LogDetail['slabs'][number]['status'] })) };
+}
+
+/** Next code in the yard's yearly series: L-2026-01, L-2026-02 … (year of felling, else this year). */
+async function nextLogCode(db: Db, felledOn: string | null | undefined) {
+  const year = (felledOn ?? new Date().toISOString()).slice(0, 4);
+  const prefix = `L-${year}-`;
+  const used = (await repo.codesWithPrefix(db, prefix))
+    .map((c) => Number(c.slice(prefix.length)))
+    .filter((n) => Number.isInteger(n));
+  const next = Math.max(0, ...used) + 1;
+  return `${prefix}${String(next).padStart(2, '0')}`;
+}
+
+async function speciesIdFor(db: Db, slug: string) {
+  const sp = await repo.findSpeciesBySlug(db, slug);
+  if (!sp) throw validationError({ speciesSlug: ['This species is not in the mill’s list'] });
+  return sp.id;
+}
+
+const codeTaken = (code: string) =>
+  new AppError(409, 'conflict', `Log code ${code} is already used.`, { code: [`${code} is already used by another log`] });
+
+export async function createLog(db: Db, raw: unknown, _actor: SessionUser): Promise<LogDetail> {
+  const input = createLogSchema.parse(raw);
+  const speciesId = await speciesIdFor(db, input.speciesSlug);
+  if (input.code && (await repo.logCodeTaken(db, input.code))) throw codeTaken(input.code);
+  const { speciesSlug: _s, ...rest } = input;
+  // Two staff recording logs at once may pick the same generated code: the unique key decides, we retry.
+  for (let attempt = 0; ; attempt++) {
+    const code = input.code ?? (await nextLogCode(db, input.felledOn));
+    try {
+      const row = await repo.insertLog(db, {
+        ...rest, code, speciesId, originNote: rest.originNote ?? '', notes: rest.notes ?? '',
+        felledOn: rest.felledOn ?? null, milledOn: rest.milledOn ?? null,
+      });
+      return getLog(db, row.id);
+    } catch (err) {
+      if (!repo.isUniqueViolation(err)) throw err;
+      if (input.code || attempt >= 4) throw codeTaken(code);
+    }
+  }
+}
+
+export async function updateLog(db: Db, id: number, raw: unknown): Promise<LogDetail> {
+  const input = updateLogSchema.parse(raw);
+  const existing = await repo.findLog(db, id);
+  if (!existing) throw notFound('That log');
+  // Check the diameters and dates against the stored values too, not only against each other.
+  const merged = { ...existing.log, ...input };
+  if (merged.topDiameterIn > merged.buttDiameterIn) {
+    throw validationError({ topDiameterIn: ['The top (small end) cannot be wider than the butt'] });
+  }
+  if (merged.felledOn && merged.milledOn && merged.milledOn < merged.felledOn) {
+    throw validationError({ milledOn: ['A log cannot be milled before it was felled'] });
+  }
+  const { speciesSlug, ...rest } = input;
+  const values: Parameters<typeof repo.updateLog>[2] = { ...rest };
+  if (speciesSlug) values.speciesId = await speciesIdFor(db, speciesSlug);
+  if (input.code && input.code !== existing.log.code) {
+    const other = await repo.logCodeTaken(db, input.code);
+    if (other && other !== id) throw codeTaken(input.code);
+  }
+  if (Object.keys(values).length) await repo.updateLog(db, id, values);
+  return getLog(db, id);
+}
