@@ -1,8 +1,8 @@
 import type { Tx } from '../../db/client';
 import { AppError } from '../../lib/errors';
 import { readMillSettings } from '../pricing/pricing.repo';
-import { canStaffMove, SLAB_TRANSITIONS } from '../../../shared/slab-input';
-import { STATUS_LABELS, type SlabStatus } from '../../../shared/slabs';
+import { canStaffMove, SLAB_TRANSITIONS, YARD_STATUS_LABELS as STATUS_LABELS } from '../../../shared/slab-input';
+import type { SlabStatus } from '../../../shared/slabs';
 import * as repo from './yard-slabs.repo';
 
 const DAY_MS = 86_400_000;
