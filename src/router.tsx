@@ -20,6 +20,11 @@ export const router = createBrowserRouter([
           { index: true, loader: catalogueLoader, element: <CatalogueRoute /> },
           { path: 'slabs/:slabId', loader: slabLoader, element: <SlabRoute /> },
           // --- buyer account routes (sign-in, holds, checkout, orders) ---
+          { path: 'sign-in', lazy: () => import('./routes/sign-in') },
+          { path: 'sign-up', lazy: () => import('./routes/sign-up') },
+          { path: 'forgot-password', lazy: () => import('./routes/forgot-password') },
+          { path: 'reset-password', lazy: () => import('./routes/reset-password') },
+          { path: 'account', lazy: () => import('./routes/account') },
           // --- yard desk (seller) routes ---
           // --- office (admin) routes ---
           { path: '*', loader: () => { throw new Response('Not found', { status: 404 }); } },

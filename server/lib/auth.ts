@@ -10,6 +10,13 @@ import { passwordResetEmail } from './email-templates';
 export const ROLES = ['buyer', 'seller', 'admin'] as const;
 export type Role = (typeof ROLES)[number];
 
+/**
+ * The header through which the app hands the client's address (as Express resolved it, with its
+ * 'trust proxy' setting) to the auth library's rate limiter; see modules/accounts/auth-gate.ts.
+ * Whatever a client sends under this name is overwritten before the library sees it.
+ */
+export const CLIENT_IP_HEADER = 'x-stickerline-client-ip';
+
 export type AuthOptions = {
   db: Db;
   secret: string;
@@ -44,7 +51,13 @@ export function createAuth({ db, secret, baseURL, mailer, signInLimitPerMinute =
       }),
     ],
     advanced: {
+      // httpOnly + SameSite=Lax always; the Secure flag (and __Secure- prefix) only over https,
+      // or the browser would drop the cookie on plain-http local runs.
       useSecureCookies: baseURL.startsWith('https://'),
+      ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
+      // The library turns its origin and redirect-URL checks off when NODE_ENV is 'test'; keep them
+      // on so tests run the same checks as production (a reset link may only lead back to us).
+      disableOriginCheck: false,
       defaultCookieAttributes: { httpOnly: true, sameSite: 'lax' },
     },
     rateLimit: {

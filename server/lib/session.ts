@@ -16,11 +16,20 @@ declare global {
 
 const asRole = (r: unknown): Role => (r === 'admin' || r === 'seller' ? r : 'buyer');
 
+/**
+ * A banned (disabled) account counts as signed out on every API call, even with a session that
+ * was issued before the ban. A ban whose end date has passed no longer applies.
+ */
+export function isBanned(u: { banned?: boolean | null; banExpires?: Date | string | null }, now = new Date()) {
+  if (!u.banned) return false;
+  return !u.banExpires || new Date(u.banExpires) > now;
+}
+
 /** Reads the session cookie (if any) once per request and puts the user on `req.user`. */
 export function loadUser(auth: Auth): RequestHandler {
   return async (req, _res, next) => {
     const session = await auth.api.getSession({ headers: fromNodeHeaders(req.headers) });
-    if (session?.user && !session.user.banned) {
+    if (session?.user && !isBanned(session.user)) {
       const u = session.user;
       req.user = { id: u.id, email: u.email, name: u.name, role: asRole(u.role) };
     }
