@@ -11,6 +11,7 @@ import { loadUser } from './lib/session';
 import { sameOriginOnly } from './lib/same-origin';
 import { catalogueRoutes } from './modules/slabs/catalogue.routes';
 import { accountRoutes } from './modules/accounts/accounts.routes';
+import { photoRoutes } from './modules/photos/photos.routes';
 import { authGate } from './modules/accounts/auth-gate';
 import { logRoutes } from './modules/logs/logs.routes';
 import { yardSlabRoutes } from './modules/slabs/yard-slabs.routes';
@@ -62,6 +63,7 @@ export function createApp(deps: AppDeps) {
   api.get('/health', (_req, res) => { res.json({ ok: true }); });
   api.use(catalogueRoutes(deps));
   api.use(accountRoutes(deps));
+  api.use(photoRoutes(deps));
   api.use(logRoutes(deps));
   api.use(yardSlabRoutes(deps));
   api.use(readingRoutes(deps));
