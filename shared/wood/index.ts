@@ -37,3 +37,4 @@ export {
 } from './lifting';
 export { SPECIES, getSpecies, type Species, type SpeciesShrinkage } from './species';
 export { toSixteenths, formatInches, formatCents, parseInches } from './format';
+export { cutPlan, CHAINSAW_KERF_IN, DEFAULT_FLATTEN_ALLOWANCE_IN, type CutPlan, type CutPlanInput, type PlannedSlab } from './cut-plan';
