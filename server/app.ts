@@ -6,11 +6,16 @@ import { toNodeHandler } from 'better-auth/node';
 import type { Db } from './db/client';
 import type { Auth } from './lib/auth';
 import type { Mailer } from './lib/mail';
+import type { Payments } from './lib/payments';
 import { apiNotFound, errorMiddleware } from './lib/errors';
 import { loadUser } from './lib/session';
 import { sameOriginOnly } from './lib/same-origin';
 import { catalogueRoutes } from './modules/slabs/catalogue.routes';
 import { accountRoutes } from './modules/accounts/accounts.routes';
+import { holdRoutes } from './modules/holds/holds.routes';
+import { checkoutRoutes } from './modules/checkout/checkout.routes';
+import { pickupRoutes } from './modules/pickups/pickups.routes';
+import { webhookRoutes } from './modules/webhooks/webhooks.routes';
 import { photoRoutes } from './modules/photos/photos.routes';
 import { authGate } from './modules/accounts/auth-gate';
 import { logRoutes } from './modules/logs/logs.routes';
@@ -22,6 +27,11 @@ export type AppDeps = {
   db: Db;
   auth: Auth;
   mailer: Mailer;
+  payments: Payments;
+  /** Overrides mill_settings.holdHours (tests). */
+  holdHours?: number;
+  /** Base URL for links in e-mails; defaults to the first trusted origin. */
+  publicUrl?: string;
   uploadsDir: string;
   /** Built client to serve (production); omitted in dev and API tests. */
   clientDir?: string;
@@ -55,6 +65,8 @@ export function createApp(deps: AppDeps) {
   // The auth library parses its own bodies, so it is mounted before express.json().
   app.use('/api/auth', authGate({ trustedOrigins: deps.trustedOrigins }));
   app.all('/api/auth/{*any}', toNodeHandler(deps.auth));
+  // Provider events are verified against their exact bytes, so this path keeps its raw body.
+  app.use('/api/webhooks/payments', express.raw({ type: 'application/json', limit: '256kb' }), webhookRoutes(deps));
   app.use(express.json({ limit: '100kb' }));
 
   const api = express.Router();
@@ -63,6 +75,9 @@ export function createApp(deps: AppDeps) {
   api.get('/health', (_req, res) => { res.json({ ok: true }); });
   api.use(catalogueRoutes(deps));
   api.use(accountRoutes(deps));
+  api.use(holdRoutes(deps));
+  api.use(checkoutRoutes(deps));
+  api.use(pickupRoutes(deps));
   api.use(photoRoutes(deps));
   api.use(logRoutes(deps));
   api.use(yardSlabRoutes(deps));

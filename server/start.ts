@@ -5,6 +5,7 @@ import type { Env } from './env';
 import { openDatabase, migrateDatabase, type Database } from './db/client';
 import { createAuth } from './lib/auth';
 import { createMailer } from './lib/mail';
+import { createPayments } from './lib/payments';
 import { startLocalFakes, type LocalFakes } from './lib/local-fakes';
 import { authSecret } from './lib/dev-secret';
 import { createApp } from './app';
@@ -53,9 +54,9 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
     await seedDemo({ db: database.db, auth, uploadsDir: env.UPLOADS_DIR, log: (m: string) => log(`[seed] ${m}`) });
   }
 
-  void stripe; // handed to the payments client once checkout is wired
+  const payments = createPayments({ secretKey: env.STRIPE_SECRET_KEY, ...stripe, webhookSecret: env.STRIPE_WEBHOOK_SECRET });
   const app = createApp({
-    db: database.db, auth, mailer, uploadsDir: env.UPLOADS_DIR,
+    db: database.db, auth, mailer, payments, publicUrl: url, uploadsDir: env.UPLOADS_DIR,
     clientDir: dev ? undefined : 'dist', trustedOrigins: [url],
   });
   const jobs = startBackgroundJobs({ db: database.db, mailer, publicUrl: url });

@@ -25,3 +25,97 @@ export function passwordResetEmail({ name, url }: { name: string; url: string })
     { label: 'Choose a new password', url },
   );
 }
+
+// --- Holds, orders and pickup ---
+
+const money = (cents: number) => `$${(cents / 100).toFixed(2)}`;
+
+export type PickupDetails = { yardAddress: string; on: string; startsAt: string; endsAt: string };
+export type OrderEmailInput = {
+  name: string;
+  code: string;
+  totalCents: number;
+  totalWeightLb: number;
+  slabs: { code: string; speciesName: string; totalCents: number; withFlattening: boolean }[];
+  pickup: PickupDetails;
+  bring: string[];
+  vehicle: string;
+  loadingHelp: boolean;
+  caution: string;
+  url: string;
+};
+
+const slabLines = (slabs: OrderEmailInput['slabs']) =>
+  slabs.map((s) => `• ${s.code} — ${s.speciesName}${s.withFlattening ? ', flattened' : ''}: ${money(s.totalCents)}`).join('\n');
+const pickupLine = (p: PickupDetails) => `${p.on}, ${p.startsAt}–${p.endsAt}, at ${p.yardAddress}`;
+
+export function orderConfirmationEmail(o: OrderEmailInput): EmailContent {
+  return layout(
+    `Order ${o.code} is paid — see you at the yard`,
+    [
+      `Hello ${o.name},`,
+      `Thank you. Your payment of ${money(o.totalCents)} went through and these slabs are now yours:\n${slabLines(o.slabs)}`,
+      `Pickup: ${pickupLine(o.pickup)}.`,
+      `Total weight about ${Math.round(o.totalWeightLb)} lb. ${o.vehicle}`,
+      `What to bring:\n${o.bring.map((b) => `• ${b}`).join('\n')}`,
+      o.loadingHelp ? 'You asked for loading help: the yard crew will be ready for you.' : 'You did not ask for loading help; tell us before the day if you need it.',
+      o.caution,
+    ],
+    { label: 'See your order', url: o.url },
+  );
+}
+
+export function pickupReminderEmail(o: Pick<OrderEmailInput, 'name' | 'code' | 'slabs' | 'pickup' | 'bring' | 'caution' | 'url' | 'totalWeightLb'>): EmailContent {
+  return layout(
+    `Tomorrow: pickup for order ${o.code}`,
+    [
+      `Hello ${o.name},`,
+      `A reminder that your slabs are waiting for you tomorrow: ${pickupLine(o.pickup)}.`,
+      slabLines(o.slabs),
+      `Total weight about ${Math.round(o.totalWeightLb)} lb. Bring:\n${o.bring.map((b) => `• ${b}`).join('\n')}`,
+      o.caution,
+    ],
+    { label: 'See your order', url: o.url },
+  );
+}
+
+export function holdExpiredEmail({ name, slabs, url }: { name: string; slabs: { code: string; speciesName: string }[]; url: string }): EmailContent {
+  const many = slabs.length > 1;
+  return layout(
+    many ? 'Your holds on slabs have ended' : `Your hold on slab ${slabs[0]?.code ?? ''} has ended`,
+    [
+      `Hello ${name},`,
+      `The hold time ran out before checkout, so ${many ? 'these slabs are' : 'this slab is'} back on sale for everyone:\n${slabs.map((s) => `• ${s.code} — ${s.speciesName}`).join('\n')}`,
+      'If you still want it, you can reserve it again while it is listed.',
+    ],
+    { label: 'Browse the yard', url },
+  );
+}
+
+// --- office (admin) messages -------------------------------------------------------------------
+
+export function refundIssuedEmail(r: { name: string; code: string; amountCents: number; reason: string; slabCodes: string[]; fullyRefunded: boolean }): EmailContent {
+  return layout(
+    `Refund of ${money(r.amountCents)} on order ${r.code}`,
+    [
+      `Hello ${r.name},`,
+      `We have refunded ${money(r.amountCents)} to the card you paid with. Depending on your bank it can take 5–10 working days to show.`,
+      `Reason: ${r.reason}`,
+      ...(r.slabCodes.length ? [`Slabs no longer part of the order: ${r.slabCodes.join(', ')}.`] : []),
+      r.fullyRefunded ? 'The order is now refunded in full.' : 'The rest of the order stays as it was.',
+      'Questions? Just reply to this message.',
+    ],
+  );
+}
+
+export function pickupRescheduledEmail(r: { name: string; code: string; pickup: PickupDetails; previous: string | null }): EmailContent {
+  return layout(
+    `New pickup time for order ${r.code}`,
+    [
+      `Hello ${r.name},`,
+      `The yard office has moved your pickup${r.previous ? ` (it was ${r.previous})` : ''}.`,
+      `New pickup: ${pickupLine(r.pickup)}.`,
+      'If this time does not suit you, reply to this message and we will find another.',
+    ],
+  );
+}

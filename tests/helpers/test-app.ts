@@ -7,14 +7,17 @@ import { inject } from 'vitest';
 import { createApp } from '../../server/app';
 import { createAuth, type Role } from '../../server/lib/auth';
 import { createMailer } from '../../server/lib/mail';
+import { createPayments } from '../../server/lib/payments';
 import { user } from '../../server/db/schema/index';
 import { freshDatabase } from './test-db';
 
 export const TEST_ORIGIN = 'http://localhost:3000';
+/** Signs provider events in webhook tests. */
+export const TEST_WEBHOOK_SECRET = 'whsec_test_only_secret';
 let counter = 0;
 
 /** The real app on a fresh database, with the run's mail catcher; close() in afterAll. */
-export async function createTestApp(opts: { signInLimitPerMinute?: number } = {}) {
+export async function createTestApp(opts: { signInLimitPerMinute?: number; holdHours?: number } = {}) {
   const database = await freshDatabase();
   const uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), 'stickerline-uploads-'));
   const mailer = createMailer({ host: '127.0.0.1', port: inject('smtpPort'), from: 'Stickerline <yard@stickerline.test>' });
@@ -22,7 +25,8 @@ export async function createTestApp(opts: { signInLimitPerMinute?: number } = {}
     db: database.db, secret: 'test-secret-test-secret-test-secret!', baseURL: TEST_ORIGIN, mailer,
     signInLimitPerMinute: opts.signInLimitPerMinute ?? 1000,
   });
-  const app = createApp({ db: database.db, auth, mailer, uploadsDir, trustedOrigins: [TEST_ORIGIN] });
+  const payments = createPayments({ secretKey: 'sk_test_local_fake', host: '127.0.0.1', port: inject('stripePort'), protocol: 'http', webhookSecret: TEST_WEBHOOK_SECRET });
+  const app = createApp({ db: database.db, auth, mailer, payments, uploadsDir, trustedOrigins: [TEST_ORIGIN], holdHours: opts.holdHours });
 
   /** Signs up a new account with `role` and returns a cookie-keeping agent for it. */
   async function signedInAs(role: Role, name = `${role} ${++counter}`) {
@@ -36,7 +40,7 @@ export async function createTestApp(opts: { signInLimitPerMinute?: number } = {}
   }
 
   return {
-    app, db: database.db, database, auth, mailer, uploadsDir, signedInAs,
+    app, db: database.db, database, auth, mailer, payments, uploadsDir, signedInAs,
     async close() {
       mailer.close();
       await database.close();

@@ -1,0 +1,32 @@
+import { eq } from 'drizzle-orm';
+import type { Db } from '../../db/client';
+import { orders } from '../../db/schema/index';
+import { recordAudit } from '../../lib/audit';
+import type { PaymentEvent } from '../../lib/payments';
+
+/**
+ * Applies a verified provider event. Each handler sets state from the event's own totals, so a
+ * repeated delivery changes nothing the second time.
+ */
+export async function applyPaymentEvent(db: Db, event: PaymentEvent) {
+  if (event.type === 'other') return { handled: false };
+  return db.transaction(async (tx) => {
+    const [order] = await tx.select().from(orders).where(eq(orders.chargeId, event.chargeId)).for('update');
+    if (!order) return { handled: false };
+    const before = { status: order.status, refundedCents: order.refundedCents, disputed: order.disputed };
+    let after = before;
+    if (event.type === 'charge.refunded') {
+      const refundedCents = Math.min(order.totalCents, Math.max(order.refundedCents, event.amountRefundedCents));
+      const status = refundedCents >= order.totalCents ? 'refunded' : order.status;
+      after = { ...before, refundedCents, status };
+      await tx.update(orders).set({ refundedCents, status }).where(eq(orders.id, order.id));
+    } else {
+      after = { ...before, disputed: true };
+      await tx.update(orders).set({ disputed: true }).where(eq(orders.id, order.id));
+    }
+    if (JSON.stringify(before) !== JSON.stringify(after)) {
+      await recordAudit(tx, { actor: null, action: `payment-event.${event.type}`, entityType: 'order', entityId: order.id, before, after: { ...after, eventId: event.id } });
+    }
+    return { handled: true };
+  });
+}

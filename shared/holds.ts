@@ -1,0 +1,42 @@
+import { z } from 'zod';
+
+/** How many slabs one buyer may hold at once, so a single account cannot empty the catalogue. */
+export const MAX_ACTIVE_HOLDS_PER_BUYER = 8;
+export const DEFAULT_HOLD_HOURS = 48;
+
+export const HOLD_STATUSES = ['active', 'released', 'expired', 'converted'] as const;
+export type HoldStatus = (typeof HOLD_STATUSES)[number];
+
+/** A book-matched pair: two neighbouring slabs from the same log, reserved together or not at all. */
+export const matchedSetSchema = z.object({
+  slabIds: z.array(z.number().int().positive(), { error: 'Choose the slabs to reserve' })
+    .length(2, 'A matched pair is exactly two slabs')
+    .refine((ids) => ids[0] !== ids[1], 'Choose two different slabs'),
+}).strict();
+export type MatchedSetInput = z.infer<typeof matchedSetSchema>;
+
+/** Flattening as offered for one held slab at checkout. */
+export type FlatteningOffer = { feasible: boolean; priceCents: number; finishedThicknessIn: number; reason?: string };
+
+export type HoldView = {
+  id: number;
+  slabId: number;
+  groupId: string | null;
+  status: HoldStatus;
+  createdAt: string;
+  expiresAt: string;
+  slab: {
+    code: string;
+    speciesName: string;
+    thicknessIn: number;
+    widthIn: number;
+    lengthIn: number;
+    boardFeet: number;
+    priceCents: number;
+    weightLb: number;
+    coverThumbUrl: string | null;
+    flattening: FlatteningOffer;
+  };
+};
+
+export type HoldsResponse = { holds: HoldView[] };
