@@ -1,0 +1,63 @@
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { useStickerline } from './harness';
+import { journey, skippedStep } from './journey';
+import { describeViolations, seriousViolations } from './axe';
+import { demoAccount, screenExists, signInQuietly } from './steps/session';
+
+const stickerline = useStickerline();
+// The app's content security policy forbids inline scripts; axe is injected as one, so these
+// scan-only pages let the test's own script through. Nothing else about the page changes.
+const AXE_PAGE = { bypassCSP: true };
+
+/** Scans the page at `path` once its main heading shows; returns a report line, empty when clean. */
+async function scan(page: Page, path: string): Promise<string> {
+  if (!(await screenExists(page, path))) {
+    skippedStep('accessibility', `${path} has no screen yet`);
+    return '';
+  }
+  await page.waitForLoadState('networkidle');
+  return describeViolations(path, await seriousViolations(page));
+}
+
+describe('accessibility of the main pages (axe-core, serious and critical only)', () => {
+  it('the catalogue, a slab page and the sign-in page have no serious problems', async () => {
+    const { page, context } = await stickerline().newPage(AXE_PAGE);
+    const reports: string[] = [];
+    await journey(page, 'accessibility-public', async () => {
+      reports.push(await scan(page, '/'));
+      const firstSlab = page.getByRole('list', { name: 'Slabs' }).getByRole('link').first();
+      const href = await firstSlab.getAttribute('href');
+      expect(href).toMatch(/^\/slabs\/\d+$/);
+      reports.push(await scan(page, href!));
+      reports.push(await scan(page, '/sign-in'));
+      reports.push(await scan(page, '/sign-up'));
+    });
+    await context.close();
+    expect(reports.filter(Boolean).join('\n\n')).toBe('');
+  });
+
+  it('the yard desk pages a seller uses have no serious problems', async () => {
+    const app = stickerline();
+    const { page, context } = await app.newPage(AXE_PAGE);
+    await signInQuietly(context, app.url, demoAccount('seller'));
+    const reports: string[] = [];
+    await journey(page, 'accessibility-yard', async () => {
+      for (const path of ['/yard', '/yard/logs', '/yard/logs/new', '/yard/slabs/new', '/yard/readings']) reports.push(await scan(page, path));
+    });
+    await context.close();
+    expect(reports.filter(Boolean).join('\n\n')).toBe('');
+  });
+
+  it('the office pages an admin uses have no serious problems', async () => {
+    const app = stickerline();
+    const { page, context } = await app.newPage(AXE_PAGE);
+    await signInQuietly(context, app.url, demoAccount('admin'));
+    const reports: string[] = [];
+    await journey(page, 'accessibility-office', async () => {
+      for (const path of ['/office', '/office/pickups', '/office/orders', '/office/holds']) reports.push(await scan(page, path));
+    });
+    await context.close();
+    expect(reports.filter(Boolean).join('\n\n')).toBe('');
+  });
+});
