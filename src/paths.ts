@@ -29,6 +29,8 @@ export const paths = {
   yardLog: (id: number | string) => `/yard/logs/${id}`,
   yardSlabNew: (query?: Query) => withQuery('/yard/slabs/new', query),
   yardSlab: (id: number | string) => `/yard/slabs/${id}`,
+  yardSlabPhotos: (id: number | string) => `/yard/slabs/${id}/photos`,
+  yardSlabReadings: (id: number | string) => `/yard/slabs/${id}/readings`,
   yardReadings: () => '/yard/readings',
   yardLabels: (ids?: number[]) => withQuery('/yard/labels', { ids: ids?.join(',') }),
   // Office: the admins' side.
@@ -38,7 +40,7 @@ export const paths = {
   officeOrder: (id: number | string) => `/office/orders/${id}`,
   officeHolds: () => '/office/holds',
   officeUsers: () => '/office/users',
-  officeAudit: () => '/office/audit',
+  officeAudit: (query?: Query) => withQuery('/office/audit', query),
   officeNumbers: () => '/office/numbers',
   officeSettings: () => '/office/settings',
 } as const;

@@ -1,0 +1,97 @@
+import { useQuery } from '@tanstack/react-query';
+import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { PageTitle } from '../../../components/ui/page-title';
+import { formatCents } from '../../../../shared/wood/index';
+import type { MillNumbers } from '../../../../shared/office';
+import { numbersQuery } from '../api';
+
+// Species colours picked from the theme's wood tones so the stacks stay readable side by side.
+const PALETTE = ['#7a4a24', '#4f6b3a', '#b7832f', '#8c3b2e', '#3f5f6e', '#a0662e', '#5d4a6b', '#6f7d44'];
+const STATUS_LABELS: Record<string, string> = {
+  drying: 'Drying', ready: 'Dry, not listed', listed: 'On sale', held: 'On hold', sold: 'Sold, waiting', 'picked-up': 'Collected', withdrawn: 'Withdrawn',
+};
+const CHARTED_STATUSES = ['drying', 'ready', 'listed', 'held'];
+
+/** One row per month with one column per species: the shape a stacked bar chart wants. */
+function byMonth(sales: MillNumbers['sales'], field: 'boardFeet' | 'revenueCents') {
+  const months = [...new Set(sales.map((s) => s.month))].sort();
+  return months.map((month) => ({
+    month,
+    ...Object.fromEntries(sales.filter((s) => s.month === month).map((s) => [s.speciesName, field === 'revenueCents' ? s.revenueCents / 100 : s.boardFeet])),
+  }));
+}
+
+export function NumbersPage() {
+  const { data } = useQuery(numbersQuery());
+  if (!data) return null;
+  const species = [...new Set(data.sales.map((s) => s.speciesName))].sort();
+  const counts = CHARTED_STATUSES.map((s) => ({ status: STATUS_LABELS[s], count: data.statusCounts.find((c) => c.status === s)?.count ?? 0 }));
+  return (
+    <div className="flex flex-col gap-6">
+      <PageTitle>The mill's numbers</PageTitle>
+      <p className="text-lg">
+        {data.averageDaysMilledToSold === null
+          ? 'No sold slab has a milling date yet.'
+          : `On average a slab sold ${data.averageDaysMilledToSold} days after its log was milled (over ${data.soldSlabsWithMillDate} sold slabs).`}
+      </p>
+      <ChartBox title="Board feet sold per month, by species">
+        <BarChart data={byMonth(data.sales, 'boardFeet')}>
+          <CartesianGrid strokeDasharray="3 3" /><XAxis dataKey="month" /><YAxis /><Tooltip /><Legend />
+          {species.map((s, i) => <Bar key={s} dataKey={s} stackId="bf" fill={PALETTE[i % PALETTE.length]} />)}
+        </BarChart>
+      </ChartBox>
+      <ChartBox title="Revenue per month (dollars), by species">
+        <BarChart data={byMonth(data.sales, 'revenueCents')}>
+          <CartesianGrid strokeDasharray="3 3" /><XAxis dataKey="month" /><YAxis /><Tooltip /><Legend />
+          {species.map((s, i) => <Bar key={s} dataKey={s} stackId="rev" fill={PALETTE[i % PALETTE.length]} />)}
+        </BarChart>
+      </ChartBox>
+      <ChartBox title="Slabs in the yard by state">
+        <BarChart data={counts}>
+          <CartesianGrid strokeDasharray="3 3" /><XAxis dataKey="status" /><YAxis allowDecimals={false} /><Tooltip />
+          <Bar dataKey="count" name="Slabs" fill={PALETTE[1]} />
+        </BarChart>
+      </ChartBox>
+      <NumbersTables data={data} />
+    </div>
+  );
+}
+
+function ChartBox({ title, children }: { title: string; children: React.ReactElement }) {
+  return (
+    <section className="rounded-lg border border-line bg-surface-raised p-3">
+      <h2 className="font-display text-lg font-bold">{title}</h2>
+      {/* The charts are pictures of the tables below, which carry the same numbers for screen readers. */}
+      <div className="mt-2 h-72" aria-hidden="true"><ResponsiveContainer width="100%" height="100%">{children}</ResponsiveContainer></div>
+    </section>
+  );
+}
+
+function NumbersTables({ data }: { data: MillNumbers }) {
+  return (
+    <section aria-labelledby="numbers-table-h" className="flex flex-col gap-4">
+      <h2 id="numbers-table-h" className="font-display text-lg font-bold">The same numbers as tables</h2>
+      <div className="overflow-x-auto">
+        <table className="w-full min-w-[28rem] text-left text-sm">
+          <caption className="text-left font-semibold">Sold per month and species</caption>
+          <thead><tr className="border-b border-line"><th scope="col">Month</th><th scope="col">Species</th><th scope="col">Slabs</th><th scope="col">Board feet</th><th scope="col">Revenue</th></tr></thead>
+          <tbody>
+            {data.sales.map((s) => (
+              <tr key={`${s.month}-${s.speciesName}`} className="border-b border-line/60">
+                <td>{s.month}</td><td>{s.speciesName}</td><td>{s.slabs}</td><td>{s.boardFeet.toFixed(2)}</td><td>{formatCents(s.revenueCents)}</td>
+              </tr>
+            ))}
+            {!data.sales.length && <tr><td colSpan={5}>Nothing sold yet.</td></tr>}
+          </tbody>
+        </table>
+      </div>
+      <table className="w-full max-w-md text-left text-sm">
+        <caption className="text-left font-semibold">Slabs by state</caption>
+        <thead><tr className="border-b border-line"><th scope="col">State</th><th scope="col">Slabs</th></tr></thead>
+        <tbody>
+          {data.statusCounts.map((c) => <tr key={c.status} className="border-b border-line/60"><td>{STATUS_LABELS[c.status] ?? c.status}</td><td>{c.count}</td></tr>)}
+        </tbody>
+      </table>
+    </section>
+  );
+}
