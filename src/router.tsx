@@ -26,6 +26,9 @@ export const router = createBrowserRouter([
           { path: 'reset-password', lazy: () => import('./routes/reset-password') },
           { path: 'account', lazy: () => import('./routes/account') },
           // --- yard desk (seller) routes ---
+          { path: 'yard/readings', lazy: () => import('./routes/yard-readings') },
+          { path: 'yard/slabs/:slabId/photos', lazy: () => import('./routes/yard-slab-photos') },
+          { path: 'yard/slabs/:slabId/readings', lazy: () => import('./routes/yard-slab-readings') },
           // --- office (admin) routes ---
           { path: '*', loader: () => { throw new Response('Not found', { status: 404 }); } },
         ],

@@ -1,0 +1,110 @@
+import { useRef, useState, type KeyboardEvent } from 'react';
+import { useFieldArray, useForm } from 'react-hook-form';
+import { Button } from '../../../components/ui/button';
+import { SelectField, TextField } from '../../../components/ui/field';
+import { Notice } from '../../../components/ui/notice';
+import { ApiError, friendlyMessage } from '../../../lib/api-client';
+import { batchReadingsSchema, BATCH_MAX_ROWS, METER_KIND_LABELS, METER_KINDS, type MeterKind, type ReadingSaved } from '../../../../shared/readings';
+import { useBatchReadings } from '../api';
+import { dryingSummary, localToday } from './drying-words';
+
+type Row = { slabCode: string; mcPercent: string; location: string };
+type Values = { measuredOn: string; meterKind: MeterKind; rows: Row[] };
+const blankRow = (): Row => ({ slabCode: '', mcPercent: '', location: '' });
+const ROW_FIELDS = ['slabCode', 'mcPercent', 'location'] as const;
+
+/**
+ * Readings for many slabs from the yard on a phone: one date and meter for the round, then a row per
+ * slab. A scanner that "types" the code and Enter moves on to the MC box; Enter there opens the next row.
+ */
+export function BatchReadings() {
+  const save = useBatchReadings();
+  const [saved, setSaved] = useState<ReadingSaved[] | null>(null);
+  const formRef = useRef<HTMLFormElement>(null);
+  const { register, control, handleSubmit, setError, clearErrors, reset, getValues, formState: { errors } } = useForm<Values>({
+    defaultValues: { measuredOn: localToday(), meterKind: 'pin', rows: [blankRow()] },
+  });
+  const rows = useFieldArray({ control, name: 'rows' });
+
+  const focus = (name: string) => requestAnimationFrame(() => formRef.current?.querySelector<HTMLInputElement>(`[name="${name}"]`)?.focus());
+  const addRow = () => { rows.append(blankRow(), { shouldFocus: false }); focus(`rows.${rows.fields.length}.slabCode`); };
+  const onEnter = (next: () => void) => (e: KeyboardEvent) => { if (e.key === 'Enter') { e.preventDefault(); next(); } };
+
+  /** Server and client both name errors "readings.2.mcPercent"; the form calls row 2 "rows.2.mcPercent". */
+  function showErrors(fieldErrors: Record<string, string[]>) {
+    for (const [key, messages] of Object.entries(fieldErrors)) {
+      const m = key.match(/^readings\.(\d+)\.(\w+)$/);
+      const field = m && (m[2] === 'slabId' ? 'slabCode' : m[2]);
+      if (m && (ROW_FIELDS as readonly (string | null)[]).includes(field)) setError(`rows.${Number(m[1])}.${field as keyof Row}`, { message: messages[0] });
+      else if (m && (m[2] === 'measuredOn' || m[2] === 'meterKind')) setError(m[2], { message: messages[0] });
+      else setError('root', { message: messages[0] });
+    }
+  }
+
+  const onSubmit = handleSubmit(async (values) => {
+    clearErrors();
+    setSaved(null);
+    const filled = values.rows.filter((r) => r.slabCode.trim() || r.mcPercent.trim());
+    const body = { readings: filled.map((r) => ({ slabCode: r.slabCode, mcPercent: r.mcPercent, location: r.location, measuredOn: values.measuredOn, meterKind: values.meterKind })) };
+    if (filled.length !== values.rows.length) reset({ ...values, rows: filled.length ? filled : [blankRow()] });
+    const checked = batchReadingsSchema.safeParse(body);
+    if (!checked.success) {
+      const fieldErrors: Record<string, string[]> = {};
+      for (const issue of checked.error.issues) (fieldErrors[issue.path.join('.') || '_form'] ??= []).push(issue.message);
+      return showErrors(fieldErrors);
+    }
+    try {
+      const res = await save.mutateAsync(body);
+      setSaved(res.items);
+      reset({ measuredOn: values.measuredOn, meterKind: values.meterKind, rows: [blankRow()] });
+      focus('rows.0.slabCode');
+    } catch (e) {
+      if (e instanceof ApiError && Object.keys(e.fieldErrors).length) showErrors(e.fieldErrors);
+      else setError('root', { message: friendlyMessage(e) });
+    }
+  });
+
+  const big = 'text-lg';
+  return (
+    <form ref={formRef} onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+      <div className="grid grid-cols-2 gap-3">
+        <TextField label="Date measured" type="date" max={localToday()} className={big} {...register('measuredOn')} error={errors.measuredOn?.message} />
+        <SelectField label="Meter" className={big} {...register('meterKind')} error={errors.meterKind?.message}>
+          {METER_KINDS.map((k) => <option key={k} value={k}>{METER_KIND_LABELS[k]}</option>)}
+        </SelectField>
+      </div>
+      <ol className="flex flex-col gap-3">
+        {rows.fields.map((field, i) => (
+          <li key={field.id} className="rounded-md border border-line bg-surface-raised p-3">
+            <fieldset className="grid grid-cols-2 gap-3 sm:grid-cols-[2fr_1fr_2fr_auto] sm:items-end">
+              <legend className="mb-1 text-sm font-semibold text-ink-soft">Slab {i + 1}</legend>
+              <TextField label="Slab code" autoCapitalize="characters" autoComplete="off" spellCheck={false} enterKeyHint="next"
+                className={big} {...register(`rows.${i}.slabCode`)} error={errors.rows?.[i]?.slabCode?.message}
+                onKeyDown={onEnter(() => focus(`rows.${i}.mcPercent`))} />
+              <TextField label="MC (%)" inputMode="decimal" autoComplete="off" enterKeyHint="next" className={big}
+                {...register(`rows.${i}.mcPercent`)} error={errors.rows?.[i]?.mcPercent?.message}
+                onKeyDown={onEnter(() => (i === rows.fields.length - 1 ? addRow() : focus(`rows.${i + 1}.slabCode`)))} />
+              <TextField label="Where (optional)" autoComplete="off" className={`col-span-2 sm:col-span-1 ${big}`}
+                {...register(`rows.${i}.location`)} error={errors.rows?.[i]?.location?.message} />
+              <Button variant="quiet" className="col-span-2 sm:col-span-1" disabled={rows.fields.length === 1}
+                onClick={() => rows.remove(i)} aria-label={`Remove slab ${i + 1}${getValues(`rows.${i}.slabCode`) ? ` (${getValues(`rows.${i}.slabCode`)})` : ''}`}>Remove</Button>
+            </fieldset>
+          </li>
+        ))}
+      </ol>
+      {errors.root?.message && <Notice tone="danger" role="alert" title="Nothing was saved">{errors.root.message}</Notice>}
+      {errors.rows && !errors.root && <Notice tone="danger" role="alert">Some rows need fixing. Nothing was saved yet.</Notice>}
+      <div className="flex flex-wrap gap-3">
+        <Button variant="secondary" onClick={addRow} disabled={rows.fields.length >= BATCH_MAX_ROWS}>Add a slab</Button>
+        <Button type="submit" disabled={save.isPending} className="grow sm:grow-0">{save.isPending ? 'Saving…' : `Save ${rows.fields.length} reading${rows.fields.length === 1 ? '' : 's'}`}</Button>
+      </div>
+      {saved && (
+        <Notice tone="success" role="status" title={`${saved.length} reading${saved.length === 1 ? '' : 's'} saved`}>
+          <ul className="list-disc pl-5">
+            {saved.map((s) => <li key={s.reading.id}><span className="font-semibold">{s.slab.code}</span>: {dryingSummary(s.slab.dryingState, s.reading.mcPercent, s.targetMcPercent)}</li>)}
+          </ul>
+        </Notice>
+      )}
+    </form>
+  );
+}

@@ -1,0 +1,13 @@
+import { DRYING_STATES } from '../../../../shared/wood/index';
+
+export const dryingLabel = (state: string) => DRYING_STATES.find((s) => s.state === state)?.label ?? state;
+
+/** "Air-dry (19.5 %) — target 8 %": what a saved reading means for the slab. */
+export const dryingSummary = (state: string, mcPercent: number, targetMcPercent: number) =>
+  `${dryingLabel(state)} (${mcPercent} %) — target ${targetMcPercent} %`;
+
+/** Today's date as the person at the yard sees it (not UTC), for the default reading date. */
+export function localToday(now = new Date()) {
+  const pad = (n: number) => String(n).padStart(2, '0');
+  return `${now.getFullYear()}-${pad(now.getMonth() + 1)}-${pad(now.getDate())}`;
+}
