@@ -45,6 +45,26 @@ export async function requireRoleLoader(queryClient: QueryClient, request: Reque
 const AUTH = '/api/auth';
 
 /**
+ * POST to the auth library. Its errors come as { code, message } rather than our { error } shape
+ * (which its front gate uses for the per-account pause); keep both codes (INVALID_PASSWORD,
+ * INVALID_TOKEN, BANNED_USER, account_paused…) so the screens can react to them.
+ */
+async function authPost<T = unknown>(path: string, body: object): Promise<T> {
+  const res = await fetch(`${AUTH}${path}`, {
+    method: 'POST',
+    credentials: 'same-origin',
+    headers: { Accept: 'application/json', 'Content-Type': 'application/json' },
+    body: JSON.stringify(body),
+  });
+  const data = await res.json().catch(() => null);
+  if (!res.ok) {
+    const ours = data?.error;
+    throw new ApiError(res.status, ours?.code ?? data?.code ?? 'error', ours?.message ?? data?.message ?? res.statusText, ours?.fieldErrors ?? {});
+  }
+  return data as T;
+}
+
+/**
  * After the signed-in person changes, forget everything cached for the previous one (holds,
  * orders, back-office lists) and load the new "me" so the header's links follow at once.
  */
@@ -56,7 +76,7 @@ async function switchedUser(queryClient: QueryClient) {
 export function useSignIn() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: SignInInput) => apiFetch(`${AUTH}/sign-in/email`, { method: 'POST', body: { ...input, rememberMe: true } }),
+    mutationFn: (input: SignInInput) => authPost('/sign-in/email', { ...input, rememberMe: true }),
     onSuccess: () => switchedUser(queryClient),
   });
 }
@@ -65,7 +85,7 @@ export function useSignUp() {
   const queryClient = useQueryClient();
   return useMutation({
     // Only name, e-mail and password are sent: the role is never the visitor's choice.
-    mutationFn: ({ name, email, password }: SignUpInput) => apiFetch(`${AUTH}/sign-up/email`, { method: 'POST', body: { name, email, password } }),
+    mutationFn: ({ name, email, password }: SignUpInput) => authPost('/sign-up/email', { name, email, password }),
     onSuccess: () => switchedUser(queryClient),
   });
 }
@@ -73,7 +93,7 @@ export function useSignUp() {
 export function useSignOut() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => apiFetch(`${AUTH}/sign-out`, { method: 'POST', body: {} }),
+    mutationFn: () => authPost('/sign-out', {}),
     onSuccess: () => {
       queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== sessionKeys.me[0] });
       queryClient.setQueryData(sessionKeys.me, null);
@@ -84,24 +104,21 @@ export function useSignOut() {
 export function useChangePassword() {
   return useMutation({
     mutationFn: ({ currentPassword, newPassword }: ChangePasswordInput) =>
-      apiFetch(`${AUTH}/change-password`, { method: 'POST', body: { currentPassword, newPassword, revokeOtherSessions: true } }),
+      authPost('/change-password', { currentPassword, newPassword, revokeOtherSessions: true }),
   });
 }
 
 export function useRequestPasswordReset() {
   return useMutation({
     mutationFn: ({ email }: ForgotPasswordInput) =>
-      apiFetch(`${AUTH}/request-password-reset`, {
-        method: 'POST',
-        // The e-mailed link lands on our reset page with ?token=…; the server only accepts our own origin here.
-        body: { email, redirectTo: `${window.location.origin}${paths.resetPassword()}` },
-      }),
+      // The e-mailed link lands on our reset page with ?token=…; the server only accepts our own origin here.
+      authPost('/request-password-reset', { email, redirectTo: `${window.location.origin}${paths.resetPassword()}` }),
   });
 }
 
 export function useResetPassword() {
   return useMutation({
     mutationFn: ({ token, newPassword }: { token: string; newPassword: string }) =>
-      apiFetch(`${AUTH}/reset-password`, { method: 'POST', body: { token, newPassword } }),
+      authPost('/reset-password', { token, newPassword }),
   });
 }
