@@ -20,10 +20,10 @@ export async function screenExists(page: Page, path: string): Promise<boolean> {
  */
 export async function signInThroughForm(page: Page, account: { email: string; password: string }, next?: string) {
   await page.goto(next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in');
-  const form = page.locator('main form').filter({ has: page.getByLabel(/e-?mail/i) }).first();
-  await form.getByLabel(/e-?mail/i).fill(account.email);
-  await form.getByLabel(/^password/i).fill(account.password);
-  await form.getByRole('button', { name: /sign in/i }).click();
+  await page.getByRole('heading', { level: 1, name: 'Sign in' }).waitFor();
+  await page.getByLabel('E-mail').fill(account.email);
+  await page.getByLabel('Password', { exact: true }).fill(account.password);
+  await page.getByRole('main').getByRole('button', { name: 'Sign in' }).click();
   await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
 }
 
@@ -36,4 +36,23 @@ export async function signInQuietly(context: BrowserContext, baseUrl: string, ac
     headers: { Origin: baseUrl }, data: { email: account.email, password: account.password },
   });
   if (!res.ok()) throw new Error(`signing in ${account.email} failed: ${res.status()} ${await res.text()}`);
+}
+
+let buyerCounter = 0;
+
+/** A new buyer identity for one journey; invented names, an address only the mail catcher sees. */
+export function newBuyer(first: string) {
+  buyerCounter += 1;
+  const stamp = `${Date.now().toString(36)}${buyerCounter}`;
+  return { name: `${first} Marrowby`, email: `${first.toLowerCase()}.${stamp}@example.test`, password: `sawdust-and-sticks-${stamp}` };
+}
+
+/** Opens an account on the sign-up screen; the app signs the new buyer in and sends them on. */
+export async function signUpThroughForm(page: Page, buyer: { name: string; email: string; password: string }) {
+  await page.getByRole('heading', { level: 1, name: 'Open an account' }).waitFor();
+  await page.getByLabel('Your name').fill(buyer.name);
+  await page.getByLabel('E-mail').fill(buyer.email);
+  await page.getByLabel('Password', { exact: true }).fill(buyer.password);
+  await page.getByRole('button', { name: 'Open my account' }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith('/sign-up'));
 }
