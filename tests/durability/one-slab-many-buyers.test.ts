@@ -1,0 +1,56 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { and, eq } from 'drizzle-orm';
+import { createTestApp, type TestApp } from '../helpers/test-app';
+import { logRow, slabRow } from '../helpers/fixtures';
+import { holds, orderLines, orders, payments } from '../../server/db/schema/index';
+import { chargesForOrder, hold, millSettingsRow, newKey, pay, windowFor } from '../server/checkout/checkout-fixtures';
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await createTestApp();
+  await millSettingsRow(t.db);
+});
+afterAll(() => t.close());
+
+type Buyer = Awaited<ReturnType<TestApp['signedInAs']>>;
+
+describe('one slab, many buyers at the same moment', () => {
+  it('when 50 buyers reserve the same slab at once, exactly one gets the hold and 49 get a clear 409', async () => {
+    const slab = await slabRow(t.db, await logRow(t.db, 'black-walnut'));
+    const buyers: Buyer[] = [];
+    for (let i = 0; i < 50; i++) buyers.push(await t.signedInAs('buyer'));
+
+    const answers = await Promise.all(buyers.map((b) => hold(b.agent, slab.id).send({})));
+
+    const statuses = answers.map((r) => r.status);
+    expect(statuses.filter((s) => s === 201)).toHaveLength(1);
+    expect(statuses.filter((s) => s === 409)).toHaveLength(49);
+    for (const r of answers.filter((a) => a.status === 409)) expect(r.body.error.message).toMatch(/\w/);
+    const active = await t.db.select().from(holds).where(and(eq(holds.slabId, slab.id), eq(holds.status, 'active')));
+    expect(active).toHaveLength(1);
+    const winner = buyers[statuses.indexOf(201)];
+    expect(active[0].buyerId).toBe(winner.id);
+  }, 300_000);
+
+  it('when one buyer pays for the same held slab ten times at once (ten keys), one order is paid and charged once', async () => {
+    const slab = await slabRow(t.db, await logRow(t.db, 'white-oak'));
+    const { window, day } = await windowFor(t.db, undefined, 20);
+    const buyer = await t.signedInAs('buyer');
+    const held = await hold(buyer.agent, slab.id).send({});
+    expect(held.status).toBe(201);
+    const body = { holdIds: [held.body.hold.id], pickupWindowId: window.id, pickupOn: day };
+
+    const answers = await Promise.all(Array.from({ length: 10 }, () => pay(buyer.agent, body, newKey())));
+
+    const statuses = answers.map((r) => r.status);
+    expect(statuses.filter((s) => s === 201), statuses.join(',')).toHaveLength(1);
+    for (const s of statuses.filter((x) => x !== 201)) expect(s).toBe(409);
+    const sold = await t.db.select().from(orderLines).where(and(eq(orderLines.slabId, slab.id), eq(orderLines.status, 'sold')));
+    expect(sold).toHaveLength(1);
+    const [order] = await t.db.select().from(orders).where(eq(orders.id, sold[0].orderId));
+    expect(order.status).toBe('paid');
+    const paidRows = await t.db.select().from(payments).where(eq(payments.orderId, order.id));
+    expect(paidRows.filter((p) => p.kind === 'charge' && p.status === 'succeeded')).toHaveLength(1);
+    expect(await chargesForOrder(order.code)).toHaveLength(1);
+  }, 300_000);
+});
