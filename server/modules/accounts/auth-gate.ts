@@ -31,6 +31,9 @@ export function authGate(opts: { trustedOrigins?: string[]; maxFailures?: number
   // The body is parsed here to read the e-mail; the auth library re-reads the parsed body
   // (its Node adapter falls back to req.body once the stream has been consumed).
   router.post('/sign-in/email', express.json({ limit: '10kb' }), (req, res, next) => {
+    // The library also reads form-encoded bodies; only JSON is let through so the count below
+    // cannot be dodged by switching the body's format.
+    if (!req.is('application/json')) throw new AppError(415, 'unsupported_media_type', 'Send the sign-in as JSON.');
     const raw: unknown = req.body?.email;
     if (typeof raw !== 'string' || !raw.trim()) return next();
     const key = raw.trim().toLowerCase();

@@ -60,6 +60,14 @@ describe('per-account limit', () => {
     expect(blocked.headers['set-cookie']).toBeUndefined();
   });
 
+  it('cannot be dodged by sending the sign-in form-encoded instead of as JSON', async () => {
+    const { email, password } = await t.signedInAs('buyer');
+    const res = await request(t.app).post('/api/auth/sign-in/email').set('Origin', TEST_ORIGIN).set('X-Forwarded-For', '203.0.113.200')
+      .type('form').send({ email, password });
+    expect(res.status).toBe(415);
+    expect(res.headers['set-cookie']).toBeUndefined();
+  });
+
   it('does not pause other accounts', async () => {
     const paused = await t.signedInAs('buyer');
     const other = await t.signedInAs('buyer');
