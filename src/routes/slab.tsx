@@ -5,6 +5,7 @@ import { slabDetailQuery } from '../features/catalogue/api';
 import { SlabPage } from '../features/catalogue/components/slab-page';
 import { FitCheck } from '../features/wood-advice/components/fit-check';
 import { FlatteningEstimatePanel } from '../features/wood-advice/components/flattening-estimate';
+import { ReserveButton } from '../features/reservations/components/reserve-button';
 
 export async function slabLoader({ params }: LoaderFunctionArgs) {
   await queryClient.ensureQueryData(slabDetailQuery(Number(params.slabId)));
@@ -23,6 +24,15 @@ function SlabExtras({ slabId }: { slabId: number }) {
   );
 }
 
+/** Reserve, with a book-matched pair offered when a neighbouring slab of the same log is also for sale. */
+function SlabActions({ slabId }: { slabId: number }) {
+  const { data: slab } = useQuery(slabDetailQuery(slabId));
+  if (!slab) return null;
+  const neighbour = slab.neighbours.find((n) => !n.isThisSlab && n.status === 'listed' && n.sequenceInLog === slab.sequenceInLog + 1)
+    ?? slab.neighbours.find((n) => !n.isThisSlab && n.status === 'listed' && n.sequenceInLog === slab.sequenceInLog - 1);
+  return <ReserveButton slabId={slab.id} slabCode={slab.code} status={slab.status} matchedNeighbour={neighbour ? { id: neighbour.id, code: neighbour.code } : null} />;
+}
+
 export function SlabRoute() {
-  return <SlabPage slots={{ extras: (slabId) => <SlabExtras slabId={slabId} /> }} />;
+  return <SlabPage slots={{ actions: (slabId) => <SlabActions slabId={slabId} />, extras: (slabId) => <SlabExtras slabId={slabId} /> }} />;
 }
