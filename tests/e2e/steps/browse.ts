@@ -5,9 +5,10 @@ export type OpenedSlab = { code: string; url: string; id: number };
 
 /**
  * From the catalogue: choose a species and a minimum thickness the way a buyer would, check every
- * card left matches, then open the first slab. Returns the slab's code and address.
+ * card left matches, then open the first slab (the first one for sale, if asked). Returns the
+ * slab's code and address.
  */
-export async function browseToSlab(page: Page, filter: { species: string; minThicknessIn: string; pick?: number }): Promise<OpenedSlab> {
+export async function browseToSlab(page: Page, filter: { species: string; minThicknessIn: string; forSale?: boolean }): Promise<OpenedSlab> {
   await page.goto('/');
   const slabs = page.getByRole('list', { name: 'Slabs' });
   await slabs.getByRole('listitem').first().waitFor();
@@ -32,7 +33,8 @@ export async function browseToSlab(page: Page, filter: { species: string; minThi
   const labels = await slabs.locator('[aria-label^="thickness "]').evaluateAll((els) => els.map((e) => e.getAttribute('aria-label') ?? ''));
   for (const label of labels) expect(Number(/thickness ([\d.]+) inches/.exec(label)?.[1])).toBeGreaterThanOrEqual(Number(filter.minThicknessIn));
 
-  const card = cards.nth(filter.pick ?? 0);
+  // A buyer about to reserve skips cards already on hold for someone else.
+  const card = filter.forSale ? cards.filter({ has: page.getByText('For sale', { exact: true }) }).first() : cards.first();
   const code = (await card.textContent())?.match(/L-\d{4}-\d{2}-\d{2}/)?.[0] ?? '';
   await card.getByRole('link').click();
   await page.waitForURL(/\/slabs\/\d+/);
