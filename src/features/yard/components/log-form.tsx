@@ -1,0 +1,69 @@
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import type { z } from 'zod';
+import { createLogSchema, type LogDetail } from '../../../../shared/logs';
+import { SAWING_METHODS, SAWING_METHOD_LABELS } from '../../../../shared/slabs';
+import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
+import { Button } from '../../../components/ui/button';
+import { Notice } from '../../../components/ui/notice';
+import { useCreateLog, useUpdateLog, yardSpeciesQuery } from '../api';
+import { applyServerErrors } from './server-errors';
+
+type In = z.input<typeof createLogSchema>;
+type Out = z.output<typeof createLogSchema>;
+
+const blankToNull = (v: unknown) => (v === '' || v === undefined ? null : v);
+const blankToUndefined = (v: unknown) => (v === '' ? undefined : v);
+const FIELDS = ['speciesSlug', 'code', 'originNote', 'felledOn', 'milledOn', 'lengthIn', 'buttDiameterIn', 'topDiameterIn', 'sawingMethod', 'notes'];
+
+/** Records a new log, or edits one when `log` is given. */
+export function LogForm({ log, onSaved }: { log?: LogDetail; onSaved: (log: LogDetail) => void }) {
+  const { data: species = [] } = useQuery(yardSpeciesQuery());
+  const create = useCreateLog();
+  const update = useUpdateLog(log?.id ?? 0);
+  const [formError, setFormError] = useState<string | null>(null);
+  const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<In, unknown, Out>({
+    resolver: zodResolver(createLogSchema),
+    defaultValues: log
+      ? { ...log, speciesSlug: log.species.slug }
+      : { sawingMethod: 'live-edge-slabbing', originNote: '', notes: '', felledOn: null, milledOn: null },
+  });
+
+  const onSubmit = handleSubmit(async (values) => {
+    setFormError(null);
+    try {
+      onSaved(log ? await update.mutateAsync(values) : await create.mutateAsync(values));
+    } catch (e) {
+      setFormError(applyServerErrors(e, setError, FIELDS));
+    }
+  });
+
+  const num = { valueAsNumber: true } as const;
+  return (
+    <form onSubmit={onSubmit} noValidate className="grid gap-4 sm:grid-cols-2">
+      {formError && <div className="sm:col-span-2"><Notice tone="danger" role="alert">{formError}</Notice></div>}
+      <SelectField label="Species" error={errors.speciesSlug?.message} {...register('speciesSlug')}>
+        <option value="">Choose…</option>
+        {species.map((s) => <option key={s.slug} value={s.slug}>{s.name}</option>)}
+      </SelectField>
+      <TextField label="Log code" hint="Leave empty to number it in this year’s series (L-2026-07)." error={errors.code?.message}
+        autoCapitalize="characters" {...register('code', { setValueAs: blankToUndefined })} />
+      <TextField label="Felled on" type="date" error={errors.felledOn?.message} {...register('felledOn', { setValueAs: blankToNull })} />
+      <TextField label="Milled on" type="date" hint="Leave empty until the log is sawn." error={errors.milledOn?.message} {...register('milledOn', { setValueAs: blankToNull })} />
+      <TextField label="Length (in)" type="number" inputMode="decimal" step="0.25" min="0" error={errors.lengthIn?.message} {...register('lengthIn', num)} />
+      <SelectField label="Sawing method" error={errors.sawingMethod?.message} {...register('sawingMethod')}>
+        {SAWING_METHODS.map((m) => <option key={m} value={m}>{SAWING_METHOD_LABELS[m]}</option>)}
+      </SelectField>
+      <TextField label="Butt diameter (in)" type="number" inputMode="decimal" step="0.25" min="0" error={errors.buttDiameterIn?.message} {...register('buttDiameterIn', num)} />
+      <TextField label="Top diameter (in)" hint="The small end." type="number" inputMode="decimal" step="0.25" min="0" error={errors.topDiameterIn?.message} {...register('topDiameterIn', num)} />
+      <TextAreaField className="sm:col-span-2" label="Where it came from" hint="Who gave or sold it and why it came down, e.g. “Storm-felled street tree, Alder Lane.”"
+        error={errors.originNote?.message} {...register('originNote')} />
+      <TextAreaField className="sm:col-span-2" label="Notes" error={errors.notes?.message} {...register('notes')} />
+      <div className="sm:col-span-2">
+        <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : log ? 'Save log' : 'Record log'}</Button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,70 @@
+import { Link } from 'react-router';
+import { useQuery } from '@tanstack/react-query';
+import { SAWING_METHOD_LABELS } from '../../../../shared/slabs';
+import { YARD_STATUS_LABELS } from '../../../../shared/slab-input';
+import { formatCents, roundBoardFeet, toSixteenths } from '../../../../shared/wood/index';
+import type { LogSlab } from '../../../../shared/logs';
+import { buttonClass } from '../../../components/ui/button';
+import { PageTitle } from '../../../components/ui/page-title';
+import { Tag } from '../../../components/ui/tag';
+import { paths } from '../../../paths';
+import { logDetailQuery } from '../api';
+import { CutPlanPanel } from './cut-plan-panel';
+import { LogForm } from './log-form';
+
+const SAME_THICKNESS_IN = 1 / 16;
+
+/** Consecutive slabs of one thickness open like a book: the yard sells them as a matched pair. */
+const bookMatches = (a: LogSlab, b: LogSlab) =>
+  b.sequenceInLog === a.sequenceInLog + 1 && Math.abs(a.thicknessIn - b.thicknessIn) <= SAME_THICKNESS_IN;
+
+export function LogPage({ id }: { id: number }) {
+  const { data: log } = useQuery(logDetailQuery(id));
+  if (!log) return null;
+  return (
+    <div className="grid gap-6">
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <PageTitle title={`Log ${log.code}`}>Log {log.code} · {log.species.name}</PageTitle>
+        <Link to={paths.yardSlabNew({ logId: log.id })} className={buttonClass('primary')}>Add slab to this log</Link>
+      </div>
+      <dl className="grid grid-cols-2 gap-x-4 gap-y-1 sm:grid-cols-4">
+        <dt className="text-sm text-ink-soft">Length</dt><dd>{toSixteenths(log.lengthIn)} in</dd>
+        <dt className="text-sm text-ink-soft">Butt / top diameter</dt><dd>{toSixteenths(log.buttDiameterIn)} / {toSixteenths(log.topDiameterIn)} in</dd>
+        <dt className="text-sm text-ink-soft">Felled</dt><dd>{log.felledOn ?? 'Unknown'}</dd>
+        <dt className="text-sm text-ink-soft">Milled</dt><dd>{log.milledOn ?? 'Not yet'}</dd>
+        <dt className="text-sm text-ink-soft">Sawing</dt><dd>{SAWING_METHOD_LABELS[log.sawingMethod]}</dd>
+        <dt className="text-sm text-ink-soft">From</dt><dd className="col-span-3 sm:col-span-1">{log.originNote || '—'}</dd>
+      </dl>
+
+      <section aria-labelledby="log-slabs" className="grid gap-2">
+        <h2 id="log-slabs" className="text-xl font-bold">Slabs in sawing order</h2>
+        {log.slabs.length === 0 ? <p>No slabs recorded from this log yet.</p> : (
+          <ol className="grid gap-1">
+            {log.slabs.map((s, i) => (
+              <li key={s.id}>
+                <div className="flex flex-wrap items-center gap-3 rounded-md border border-line bg-surface-raised p-2">
+                  <span className="w-8 text-right font-semibold">{s.sequenceInLog}</span>
+                  <Link className="font-semibold text-accent underline" to={paths.yardSlab(s.id)}>{s.code}</Link>
+                  <span>{toSixteenths(s.thicknessIn)} × {toSixteenths(s.widthIn)} × {toSixteenths(s.lengthIn)} in</span>
+                  <span>{roundBoardFeet(s.boardFeet)} bd ft</span>
+                  <span>{formatCents(s.priceCents)}</span>
+                  <Tag tone={s.status === 'listed' ? 'moss' : s.status === 'withdrawn' ? 'danger' : 'neutral'}>{YARD_STATUS_LABELS[s.status]}</Tag>
+                </div>
+                {log.slabs[i + 1] && bookMatches(s, log.slabs[i + 1]) && (
+                  <p className="ml-11 border-l-2 border-accent pl-2 text-sm text-accent-strong">Book-matches the next slab (same thickness, sawn side by side)</p>
+                )}
+              </li>
+            ))}
+          </ol>
+        )}
+      </section>
+
+      <CutPlanPanel log={log} />
+
+      <details className="rounded-md border border-line bg-surface-raised p-4">
+        <summary className="cursor-pointer font-semibold">Edit log details</summary>
+        <div className="mt-4"><LogForm log={log} onSaved={() => undefined} /></div>
+      </details>
+    </div>
+  );
+}
