@@ -13,6 +13,8 @@ export const router = createBrowserRouter([
     path: '/',
     element: <RootLayout />,
     errorElement: <RootLayout />,
+    // Shown while the first page's loaders run (no server rendering here).
+    hydrateFallbackElement: <p className="p-6 text-ink-soft">Opening the yard…</p>,
     children: [
       {
         errorElement: <RouteError />,
