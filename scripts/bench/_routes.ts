@@ -1,0 +1,15 @@
+const { createTestAppLike } = { createTestAppLike: null };
+import { PGlite } from '@electric-sql/pglite';
+import { openDatabase } from '../../server/db/client';
+import { createApp } from '../../server/app';
+import { createAuth } from '../../server/lib/auth';
+import { createMailer } from '../../server/lib/mail';
+import { createPayments } from '../../server/lib/payments';
+import { listRoutes } from '../../tests/security/route-list';
+const d = await openDatabase({});
+const mailer = createMailer({ host: '127.0.0.1', port: 1, from: 'x <x@x.test>' });
+const auth = createAuth({ db: d.db, secret: 'test-secret-test-secret-test-secret!', baseURL: 'http://localhost:3000', mailer });
+const payments = createPayments({ secretKey: 'sk_test', host: '127.0.0.1', port: 1, protocol: 'http', webhookSecret: 'whsec_x' });
+const app = createApp({ db: d.db, auth, mailer, payments, uploadsDir: '/tmp', trustedOrigins: ['http://localhost:3000'] } as never);
+for (const r of listRoutes(app)) console.log(r.method.padEnd(7), r.path);
+mailer.close(); await d.close();
