@@ -1,5 +1,5 @@
 // Tables used by the auth library (better-auth core + admin plugin). Column names follow what
-// its CLI generates (`npm run auth:generate`); keep them in step when upgrading the library.
+// its CLI generates (compare with `npm run auth:check`); keep them in step when upgrading the library.
 import { boolean, index, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
 
 export const user = pgTable('user', {
