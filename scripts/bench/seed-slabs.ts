@@ -13,7 +13,7 @@ function prng(seed: number) {
 /** Writes `count` listed slabs (with a reading and a cover photo row each) across every species. */
 export async function seedSlabs(db: Db, count: number) {
   const rand = prng(4242);
-  const speciesRows = [];
+  const speciesRows: (typeof species.$inferSelect)[] = [];
   for (const s of SPECIES) {
     const info = getSpecies(s.slug);
     const [row] = await db.insert(species).values({
