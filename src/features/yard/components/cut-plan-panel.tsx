@@ -27,7 +27,7 @@ export function CutPlanPanel({ log }: { log: LogSummary }) {
       <h2 id={headingId} className="text-xl font-bold">Cut plan</h2>
       <p className="text-sm text-ink-soft">A sketch before sawing: how many slabs of a chosen green thickness fit across the log, how wide each is, and how thick it ends up after drying and flattening.</p>
       <div className="grid gap-3 sm:grid-cols-3">
-        <TextField label="Green thickness (in)" type="number" inputMode="decimal" step="0.125" min="0.25" value={thickness} onChange={(e) => setThickness(e.target.value)} />
+        <TextField label="Slab thickness when green (in)" type="number" inputMode="decimal" step="0.125" min="0.25" value={thickness} onChange={(e) => setThickness(e.target.value)} />
         <TextField label="Saw kerf (in)" hint="About 3/8 for a chainsaw mill, 1/8 for a band mill." type="number" inputMode="decimal" step="0.0625" min="0" value={kerf} onChange={(e) => setKerf(e.target.value)} />
         <SelectField label="Diameter used" value={measure} onChange={(e) => setMeasure(e.target.value as Measure)}>
           <option value="top">Small end ({toSixteenths(log.topDiameterIn)} in) — full-length width</option>

@@ -31,7 +31,7 @@ export function WidthsField({ control, register, errors }: Props) {
             <TextField className="flex-1" label={`Station ${i + 1}`} type="number" inputMode="decimal" step="0.125" min="0"
               error={errors.widths?.[i]?.value?.message} {...register(`widths.${i}.value`, { valueAsNumber: true })} />
             {fields.length > SLAB_LIMITS.minStations && (
-              <Button variant="quiet" aria-label={`Remove station ${i + 1}`} onClick={() => remove(i)}>✕</Button>
+              <Button variant="quiet" aria-label={`Remove width ${i + 1}`} onClick={() => remove(i)}>✕</Button>
             )}
           </div>
         ))}
