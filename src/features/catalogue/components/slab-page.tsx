@@ -63,7 +63,9 @@ export function SlabPage({ slots = {} }: { slots?: SlabPageSlots }) {
           <p className="mt-2 text-sm">
             {slab.moisturePercent !== null && <>Latest reading {slab.moisturePercent} % MC ({slab.moistureReadings.at(-1)?.meterKind} meter, {slab.moistureReadings.at(-1)?.measuredOn}). </>}
             {drying && <>{drying.description} </>}
-            {slab.airDryReadyOn && <>Estimated air-dry by {slab.airDryReadyOn} (rule of thumb: about a year per inch of thickness). </>}
+            {slab.airDryReadyOn && (slab.airDryReadyOn > new Date().toISOString().slice(0, 10)
+              ? <>Estimated air-dry by {slab.airDryReadyOn} (rule of thumb: about a year per inch of thickness). </>
+              : <>It has had its year per inch of air drying (rule of thumb) since {slab.airDryReadyOn}. </>)}
             The mill's target for furniture stock is {slab.targetMcPercent} % MC.
           </p>
         </div>

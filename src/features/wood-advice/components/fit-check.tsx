@@ -48,8 +48,8 @@ export function FitCheck({ speciesSlug, speciesName, widthIn, currentMcPercent, 
     <section aria-labelledby="fit-check" className="rounded-lg border border-line bg-surface-raised p-4">
       <h2 id="fit-check" className="text-xl font-bold">Fit check: will it move in your shop?</h2>
       <p className="mb-3 text-ink-soft">Wood takes up or gives off water until it matches the air around it. Tell us your shop's usual conditions.</p>
-      <div className="grid gap-3 sm:grid-cols-3">
-        <SelectField label="Your shop is most like" value={preset ? climate : 'custom'} onChange={(e) => choose(e.target.value)}>
+      <div className="grid gap-3 sm:grid-cols-2">
+        <SelectField className="sm:col-span-2" label="Your shop is most like" value={preset ? climate : 'custom'} onChange={(e) => choose(e.target.value)}>
           {SHOP_CLIMATES.map((c) => <option key={c.id} value={c.id}>{c.label}</option>)}
           <option value="custom">My own numbers</option>
         </SelectField>
