@@ -27,7 +27,7 @@ function SlabLabel({ slab }: { slab: YardSlabDetail }) {
         <p className="font-semibold">{slab.species.name}</p>
         <p>{toSixteenths(slab.thicknessIn)}″ × {toSixteenths(slab.widthIn)}″ × {toSixteenths(slab.lengthIn)}″</p>
         <p>{roundBoardFeet(slab.boardFeet)} board feet</p>
-        <p className="text-sm">Stack {slab.yardStack || '—'}{slab.yardPosition ? ` · ${slab.yardPosition}` : ''}</p>
+        <p className="text-sm">Kept at: {[slab.yardStack, slab.yardPosition].filter(Boolean).join(' · ') || 'not recorded'}</p>
       </div>
     </article>
   );
