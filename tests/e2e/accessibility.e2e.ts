@@ -3,7 +3,9 @@ import type { Page } from 'playwright-core';
 import { useStickerline } from './harness';
 import { journey, skippedStep } from './journey';
 import { describeViolations, seriousViolations } from './axe';
-import { demoAccount, screenExists, signInQuietly } from './steps/session';
+import { browseToSlab } from './steps/browse';
+import { reserveOpenSlab } from './steps/buying';
+import { demoAccount, newBuyer, screenExists, signInQuietly } from './steps/session';
 
 const stickerline = useStickerline();
 // The app's content security policy forbids inline scripts; axe is injected as one, so these
@@ -43,6 +45,23 @@ describe('accessibility of the main pages (axe-core, serious and critical only)'
     expect(reports.filter(Boolean).join('\n\n')).toBe('');
   });
 
+  it('a buyer\'s holds, checkout, orders and account pages have no serious problems', async () => {
+    const app = stickerline();
+    const { page, context } = await app.newPage(AXE_PAGE);
+    const buyer = newBuyer('Tamsin');
+    const signUp = await context.request.post(`${app.url}/api/auth/sign-up/email`, { headers: { Origin: app.url }, data: buyer });
+    expect(signUp.ok()).toBe(true);
+    const reports: string[] = [];
+    await journey(page, 'accessibility-buyer', async () => {
+      // A held slab, so the holds and checkout pages show their full forms rather than an empty notice.
+      const slab = await browseToSlab(page, { species: 'Red maple', minThicknessIn: '1', forSale: true });
+      await reserveOpenSlab(page, slab.code);
+      for (const path of ['/reservations', '/checkout', '/orders', '/account']) reports.push(await scan(page, path, { guarded: true }));
+    });
+    await context.close();
+    expect(reports.filter(Boolean).join('\n\n')).toBe('');
+  });
+
   it('the yard desk pages a seller uses have no serious problems', async () => {
     const app = stickerline();
     const { page, context } = await app.newPage(AXE_PAGE);
@@ -50,6 +69,12 @@ describe('accessibility of the main pages (axe-core, serious and critical only)'
     const reports: string[] = [];
     await journey(page, 'accessibility-yard', async () => {
       for (const path of ['/yard', '/yard/logs', '/yard/logs/new', '/yard/slabs/new', '/yard/readings']) reports.push(await scan(page, path, { guarded: true }));
+      // One slab's own record, photo and moisture pages, reached from the yard's slab list.
+      await page.goto('/yard');
+      const record = page.getByRole('main').getByRole('link', { name: /^L-\d{4}-\d{2}-\d{2}$/ }).first();
+      const href = await record.getAttribute('href');
+      expect(href).toMatch(/^\/yard\/slabs\/\d+$/);
+      for (const path of [href!, `${href}/photos`, `${href}/readings`]) reports.push(await scan(page, path, { guarded: true }));
     });
     await context.close();
     expect(reports.filter(Boolean).join('\n\n')).toBe('');
@@ -61,7 +86,9 @@ describe('accessibility of the main pages (axe-core, serious and critical only)'
     await signInQuietly(context, app.url, demoAccount('admin'));
     const reports: string[] = [];
     await journey(page, 'accessibility-office', async () => {
-      for (const path of ['/office', '/office/pickups', '/office/orders', '/office/holds', '/office/users', '/office/audit']) reports.push(await scan(page, path, { guarded: true }));
+      for (const path of ['/office', '/office/pickups', '/office/orders', '/office/holds', '/office/users', '/office/audit', '/office/settings']) {
+        reports.push(await scan(page, path, { guarded: true }));
+      }
     });
     await context.close();
     expect(reports.filter(Boolean).join('\n\n')).toBe('');
