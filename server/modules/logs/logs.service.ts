@@ -85,7 +85,13 @@ export async function updateLog(db: Db, id: number, raw: unknown): Promise<LogDe
   }
   const { speciesSlug, ...rest } = input;
   const values: Parameters<typeof repo.updateLog>[2] = { ...rest };
-  if (speciesSlug) values.speciesId = await speciesIdFor(db, speciesSlug);
+  if (speciesSlug && speciesSlug !== existing.speciesSlug) {
+    // Slabs copy their species (and price rate) from the log when recorded; a silent change would split them.
+    if (Number(existing.slabCount) > 0) {
+      throw new AppError(409, 'conflict', 'This log already has slabs, so its species cannot change here.', { speciesSlug: ['The log already has slabs'] });
+    }
+    values.speciesId = await speciesIdFor(db, speciesSlug);
+  }
   if (input.code && input.code !== existing.log.code) {
     const other = await repo.logCodeTaken(db, input.code);
     if (other && other !== id) throw codeTaken(input.code);

@@ -98,3 +98,16 @@ describe('PATCH /api/logs/:id', () => {
     expect(bad.body.error.fieldErrors.topDiameterIn).toBeDefined();
   });
 });
+
+describe('changing a log’s species', () => {
+  it('answers 409 once the log has slabs, so slabs never disagree with their log', async () => {
+    await speciesRow(t.db, 'white-oak');
+    const log = await logRow(t.db, 'black-walnut');
+    await slabRow(t.db, log);
+    const res = await seller.patch(`/api/logs/${log.id}`).set('Origin', TEST_ORIGIN).send({ speciesSlug: 'white-oak' });
+    expect(res.status).toBe(409);
+    expect(res.body.error.fieldErrors.speciesSlug).toBeDefined();
+    const empty = await logRow(t.db, 'black-walnut');
+    expect((await seller.patch(`/api/logs/${empty.id}`).set('Origin', TEST_ORIGIN).send({ speciesSlug: 'white-oak' })).body.species.slug).toBe('white-oak');
+  });
+});
