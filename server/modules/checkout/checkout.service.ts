@@ -128,7 +128,7 @@ export async function checkout(deps: CheckoutDeps, buyer: SessionUser, input: Ch
   try {
     ({ chargeId } = await deps.payments.charge({
       amountCents: order.totalCents, source: input.cardToken, idempotencyKey: chargeKey(key),
-      description: `Stickerline order ${order.code}`, metadata: { orderId: String(order.id), orderCode: order.code },
+      description: `Stickerline order ${order.code}`, metadata: { orderId: String(order.id), orderCode: order.code, checkoutKey: key },
     }));
   } catch (err) {
     await failOrder(deps.db, order, err instanceof AppError ? err.message : 'The payment service could not be reached.');

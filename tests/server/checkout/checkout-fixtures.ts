@@ -1,7 +1,8 @@
 import Stripe from 'stripe';
 import { inject } from 'vitest';
+import { eq } from 'drizzle-orm';
 import type { Db } from '../../../server/db/client';
-import { millSettings, pickupWindows } from '../../../server/db/schema/index';
+import { millSettings, orders, pickupWindows } from '../../../server/db/schema/index';
 import { TEST_ORIGIN, type TestApp } from '../../helpers/test-app';
 
 export const YARD_ADDRESS = '7 Fernlow Lane, Brackwater, Tessel County';
@@ -42,7 +43,17 @@ export function fakeProvider() {
   return new Stripe('sk_test_local_fake', { host: '127.0.0.1', port: inject('stripePort'), protocol: 'http', maxNetworkRetries: 0 });
 }
 
-export async function chargesForOrder(orderCode: string) {
+/**
+ * Charges the fake holds for any of these checkout keys. Keys, unlike order codes, are unique
+ * across the whole test run (every test file shares one payment fake but has its own database).
+ */
+export async function chargesForKeys(keys: string[]) {
   const list = await fakeProvider().charges.list({ limit: 100 });
-  return list.data.filter((c) => c.metadata?.orderCode === orderCode);
+  return list.data.filter((c) => keys.includes(c.metadata?.checkoutKey ?? ''));
+}
+
+/** Charges the fake holds for one order of this test's database. */
+export async function chargesForOrder(db: Db, orderId: number) {
+  const [order] = await db.select().from(orders).where(eq(orders.id, orderId));
+  return chargesForKeys([order.idempotencyKey]);
 }

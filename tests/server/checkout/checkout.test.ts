@@ -46,7 +46,7 @@ describe('checkout', () => {
     const [payment] = await t.db.select().from(payments).where(eq(payments.orderId, order.id));
     expect(payment).toMatchObject({ kind: 'charge', status: 'succeeded', amountCents: order.totalCents });
     expect(payment.providerId).toMatch(/^ch_/);
-    expect(await chargesForOrder(order.code)).toHaveLength(1);
+    expect(await chargesForOrder(t.db, order.id)).toHaveLength(1);
 
     await flushOutbox(t.db, t.mailer);
     const mail = await waitForMail(buyer.email, (m) => m.subject.includes(order.code));
@@ -83,7 +83,7 @@ describe('checkout', () => {
     expect(second.status).toBe(200);
     expect(second.body.order.id).toBe(first.body.order.id);
     expect(await t.db.select().from(payments).where(eq(payments.orderId, first.body.order.id))).toHaveLength(1);
-    expect(await chargesForOrder(first.body.order.code)).toHaveLength(1);
+    expect(await chargesForOrder(t.db, first.body.order.id)).toHaveLength(1);
   });
 
   it('a double click (two requests at once with one key) makes one order and one charge', async () => {
@@ -93,7 +93,7 @@ describe('checkout', () => {
     expect(both.map((r) => r.status).sort()).toContain(201);
     const mine = await t.db.select().from(orders).where(eq(orders.buyerId, buyer.id));
     expect(mine).toHaveLength(1);
-    expect(await chargesForOrder(mine[0].code)).toHaveLength(1);
+    expect(await chargesForOrder(t.db, mine[0].id)).toHaveLength(1);
   });
 
   it('paying for a slab already paid for is refused with 409', async () => {
