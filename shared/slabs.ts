@@ -140,3 +140,21 @@ export type SlabDetail = Omit<SlabListItem, 'species'> & {
   targetMcPercent: number;
   flatteningPriceCents: number;
 };
+
+/** What each status means to a buyer, in Stickerline's words. */
+export const STATUS_LABELS: Record<SlabStatus, string> = {
+  drying: 'Still drying',
+  ready: 'Dry — being readied',
+  listed: 'For sale',
+  held: 'On hold for a buyer',
+  sold: 'Sold',
+  'picked-up': 'Sold and collected',
+  withdrawn: 'Withdrawn',
+};
+
+export const SAWING_METHOD_LABELS: Record<(typeof SAWING_METHODS)[number], string> = {
+  flatsawn: 'Flatsawn',
+  quartersawn: 'Quartersawn',
+  'through-and-through': 'Through-and-through',
+  'live-edge-slabbing': 'Live-edge slabbing',
+};
