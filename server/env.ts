@@ -23,6 +23,10 @@ export const envSchema = z.object({
   STRIPE_PROTOCOL: z.enum(['http', 'https']).optional(),
   STRIPE_WEBHOOK_SECRET: z.string().default('whsec_local_development_only'),
   SEED_DEMO: z.enum(['true', 'false']).default('true'),
+  /** IANA time zone of the yard; pickup windows are wall-clock times there. */
+  MILL_TIME_ZONE: z.string().default('UTC').refine((tz) => {
+    try { new Intl.DateTimeFormat('en-US', { timeZone: tz }); return true; } catch { return false; }
+  }, 'MILL_TIME_ZONE must be an IANA time zone such as America/Chicago'),
 });
 
 export type Env = z.infer<typeof envSchema>;

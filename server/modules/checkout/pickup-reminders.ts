@@ -1,13 +1,13 @@
 import type { Db } from '../../db/client';
 import { queueEmail } from '../../lib/outbox';
 import { pickupReminderEmail } from '../../lib/email-templates';
-import { addDays, isoDay } from '../pickups/slot-calendar';
+import { addDays, millDay } from '../pickups/slot-calendar';
 import { orderEmailInput } from './order-view';
 import * as repo from './checkout.repo';
 
 /** Queues the day-before reminder for every paid order collected tomorrow, once per order. */
 export async function queuePickupReminders(db: Db, { now = new Date(), publicUrl = '' } = {}) {
-  const tomorrow = addDays(isoDay(now), 1);
+  const tomorrow = addDays(millDay(now), 1);
   return db.transaction(async (tx) => {
     const due = await repo.ordersToRemind(tx, tomorrow);
     for (const { id } of due) {

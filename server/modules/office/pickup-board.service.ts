@@ -9,7 +9,7 @@ import { formatWindow } from '../../../shared/pickups';
 import type { PickupBoard, PickupDay, PickupOrder, PickupSlot, OrderStatus, RescheduleInput } from '../../../shared/office';
 import { readYardAddress } from '../pickups/pickups.repo';
 import { claimPickupPlace } from '../pickups/pickups.service';
-import { addDays, isoDay, windowStart } from '../pickups/slot-calendar';
+import { addDays, millDay, windowStart } from '../pickups/slot-calendar';
 import * as repo from './orders.repo';
 import { getOrderDetail } from './orders.service';
 import { issueRefund, sendQueuedMail, type RefundDeps } from './refunds.service';
@@ -19,7 +19,7 @@ const view = (w: { id: number; weekday: number; startsAt: string; endsAt: string
 
 /** Today and the coming days, each split by weekly window, with the orders due in it. */
 export async function pickupBoard(db: Db, q: { from?: string; days: number }, now = new Date()): Promise<PickupBoard> {
-  const from = q.from ?? isoDay(now);
+  const from = q.from ?? millDay(now);
   const to = addDays(from, q.days - 1);
   const [windows, closed, rows, noShowRule] = await Promise.all([
     repo.allWindows(db), repo.closedDaysBetween(db, from, to), repo.ordersForPickup(db, from, to), repo.readNoShowRule(db),

@@ -4,10 +4,10 @@ import { recordAudit } from '../../lib/audit';
 import type { SessionUser } from '../../lib/session';
 import { formatWindow, WEEKDAY_NAMES, type PickupSettings, type PickupSlotsResponse, type PickupWindowView } from '../../../shared/pickups';
 import * as repo from './pickups.repo';
-import { addDays, buildSlots, isoDay, windowStart } from './slot-calendar';
+import { addDays, buildSlots, millDay, windowStart } from './slot-calendar';
 
 export async function listPickupSlots(db: Db, { from, days, now = new Date() }: { from?: string; days: number; now?: Date }): Promise<PickupSlotsResponse> {
-  const today = isoDay(now);
+  const today = millDay(now);
   const start = from && from > today ? from : today;
   const end = addDays(start, days - 1);
   const [windows, closed, booked, yardAddress] = await Promise.all([

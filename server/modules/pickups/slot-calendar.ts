@@ -6,11 +6,29 @@ const DAY_MS = 86_400_000;
 export const isoDay = (d: Date) => d.toISOString().slice(0, 10);
 export const addDays = (day: string, n: number) => isoDay(new Date(Date.parse(`${day}T00:00:00Z`) + n * DAY_MS));
 
-/**
- * The mill's clock. Window times are read as UTC until the mill has a time-zone setting, so the
- * demo's dates and times agree on every machine.
- */
-export const windowStart = (day: string, hhmm: string) => new Date(`${day}T${hhmm}:00Z`);
+/** The mill's time zone (IANA name, e.g. America/Chicago) from MILL_TIME_ZONE; UTC when unset. */
+export const millTimeZone = () => process.env.MILL_TIME_ZONE || 'UTC';
+
+/** How far the wall clock in `tz` is ahead of UTC at instant `at`, in ms. */
+function zoneOffsetMs(at: Date, tz: string): number {
+  const parts = new Intl.DateTimeFormat('en-US', {
+    timeZone: tz, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', second: '2-digit',
+  }).formatToParts(at);
+  const get = (type: string) => Number(parts.find((p) => p.type === type)?.value);
+  return Date.UTC(get('year'), get('month') - 1, get('day'), get('hour'), get('minute'), get('second')) - at.getTime();
+}
+
+/** The instant a window opens: wall time `hhmm` on `day` at the mill (daylight saving included). */
+export function windowStart(day: string, hhmm: string, tz = millTimeZone()): Date {
+  const naive = Date.parse(`${day}T${hhmm}:00Z`);
+  const first = naive - zoneOffsetMs(new Date(naive), tz);
+  // Near a clock change the offset at the true instant can differ from the guess: use that one.
+  return new Date(naive - zoneOffsetMs(new Date(first), tz));
+}
+
+/** The calendar date at the mill for an instant (YYYY-MM-DD). */
+export const millDay = (at: Date, tz = millTimeZone()) =>
+  new Intl.DateTimeFormat('en-CA', { timeZone: tz, year: 'numeric', month: '2-digit', day: '2-digit' }).format(at);
 
 /** Dates × weekly windows from `from` for `days` days: closed days and windows already begun are left out. */
 export function buildSlots({ windows, closed, booked, from, days, now }: {
