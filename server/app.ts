@@ -10,6 +10,7 @@ import type { Payments } from './lib/payments';
 import { apiNotFound, errorMiddleware } from './lib/errors';
 import { loadUser } from './lib/session';
 import { sameOriginOnly } from './lib/same-origin';
+import { writeLimit } from './lib/write-limit';
 import { catalogueRoutes } from './modules/slabs/catalogue.routes';
 import { accountRoutes } from './modules/accounts/accounts.routes';
 import { holdRoutes } from './modules/holds/holds.routes';
@@ -28,6 +29,8 @@ export type AppDeps = {
   auth: Auth;
   mailer: Mailer;
   payments: Payments;
+  /** State-changing API calls allowed per client address per minute; 0 = no limit. Default 300. */
+  writeLimitPerMinute?: number;
   /** Overrides mill_settings.holdHours (tests). */
   holdHours?: number;
   /** Base URL for links in e-mails; defaults to the first trusted origin. */
@@ -71,6 +74,7 @@ export function createApp(deps: AppDeps) {
 
   const api = express.Router();
   api.use(sameOriginOnly(deps.trustedOrigins ?? []));
+  api.use(writeLimit(deps.writeLimitPerMinute ?? 300));
   api.use(loadUser(deps.auth));
   api.get('/health', (_req, res) => { res.json({ ok: true }); });
   api.use(catalogueRoutes(deps));

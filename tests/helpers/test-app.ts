@@ -17,7 +17,7 @@ export const TEST_WEBHOOK_SECRET = 'whsec_test_only_secret';
 let counter = 0;
 
 /** The real app on a fresh database, with the run's mail catcher; close() in afterAll. */
-export async function createTestApp(opts: { signInLimitPerMinute?: number; holdHours?: number } = {}) {
+export async function createTestApp(opts: { signInLimitPerMinute?: number; holdHours?: number; writeLimitPerMinute?: number } = {}) {
   const database = await freshDatabase();
   const uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), 'stickerline-uploads-'));
   const mailer = createMailer({ host: '127.0.0.1', port: inject('smtpPort'), from: 'Stickerline <yard@stickerline.test>' });
@@ -26,7 +26,8 @@ export async function createTestApp(opts: { signInLimitPerMinute?: number; holdH
     signInLimitPerMinute: opts.signInLimitPerMinute ?? 1000,
   });
   const payments = createPayments({ secretKey: 'sk_test_local_fake', host: '127.0.0.1', port: inject('stripePort'), protocol: 'http', webhookSecret: TEST_WEBHOOK_SECRET });
-  const app = createApp({ db: database.db, auth, mailer, payments, uploadsDir, trustedOrigins: [TEST_ORIGIN], holdHours: opts.holdHours });
+  const app = createApp({ db: database.db, auth, mailer, payments, uploadsDir, trustedOrigins: [TEST_ORIGIN], holdHours: opts.holdHours,
+    writeLimitPerMinute: opts.writeLimitPerMinute ?? 0 });
 
   /** Signs up a new account with `role` and returns a cookie-keeping agent for it. */
   async function signedInAs(role: Role, name = `${role} ${++counter}`) {
