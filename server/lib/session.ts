@@ -28,6 +28,8 @@ export function isBanned(u: { banned?: boolean | null; banExpires?: Date | strin
 /** Reads the session cookie (if any) once per request and puts the user on `req.user`. */
 export function loadUser(auth: Auth): RequestHandler {
   return async (req, _res, next) => {
+    // Visitors carry no session cookie: skip the lookup (most catalogue traffic).
+    if (!req.headers.cookie?.includes('session_token')) return next();
     const session = await auth.api.getSession({ headers: fromNodeHeaders(req.headers) });
     if (session?.user && !isBanned(session.user)) {
       const u = session.user;

@@ -53,6 +53,8 @@ export async function findSlabPage(db: Tx, q: SlabListQuery) {
       dryingState: slabs.dryingState, liveEdge: slabs.liveEdge, figures: slabs.figures,
       logId: slabs.logId, sequenceInLog: slabs.sequenceInLog,
       moisturePercent: latestMoisture, coverKey,
+      // The total rides along with the page (one query instead of two).
+      total: sql<number>`(count(*) over ())::int`,
     })
     .from(slabs)
     .innerJoin(species, eq(species.id, slabs.speciesId))
@@ -60,6 +62,8 @@ export async function findSlabPage(db: Tx, q: SlabListQuery) {
     .orderBy(...orderFor(q.sort))
     .limit(q.pageSize)
     .offset((q.page - 1) * q.pageSize);
+  if (rows.length > 0 || q.page === 1) return { rows, total: rows[0]?.total ?? 0 };
+  // Past the last page there is no row to carry the total: count on its own.
   const [{ count }] = await db
     .select({ count: sql<number>`count(*)::int` })
     .from(slabs)

@@ -73,6 +73,10 @@ describe('GET /api/slabs', () => {
     const page2 = await request(t.app).get('/api/slabs?pageSize=2&page=2&sort=price-asc');
     expect(page2.body).toMatchObject({ total: 3, page: 2, pageSize: 2 });
     expect(page2.body.items).toHaveLength(1);
+    const pastTheEnd = await request(t.app).get('/api/slabs?pageSize=2&page=5');
+    expect(pastTheEnd.body).toMatchObject({ total: 3, page: 5, items: [] });
+    const none = await request(t.app).get('/api/slabs?species=sweetgum');
+    expect(none.body).toMatchObject({ total: 0, items: [] });
   });
 
   it.each([
