@@ -158,3 +158,10 @@ export const SAWING_METHOD_LABELS: Record<(typeof SAWING_METHODS)[number], strin
   'through-and-through': 'Through-and-through',
   'live-edge-slabbing': 'Live-edge slabbing',
 };
+
+/**
+ * Slabs sawn one after the other from the same log open like a book: their facing sides mirror
+ * each other (common practice). The one rule for "book-matched" across the shop.
+ */
+export const areBookMatched = (a: { logId: number; sequenceInLog: number }, b: { logId: number; sequenceInLog: number }) =>
+  a.logId === b.logId && Math.abs(a.sequenceInLog - b.sequenceInLog) === 1;

@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import { areBookMatched } from '../../../shared/slabs';
 import type { Db, Tx } from '../../db/client';
 import { AppError, notFound } from '../../lib/errors';
 import { recordAudit } from '../../lib/audit';
@@ -75,7 +76,7 @@ export async function placeMatchedSet(db: Db, buyer: SessionUser, slabIds: numbe
   const found = await repo.findLogNeighbours(db, slabIds);
   if (found.length !== slabIds.length) throw notFound('One of those slabs');
   const [a, b] = found;
-  if (a.logId !== b.logId || Math.abs(a.sequenceInLog - b.sequenceInLog) !== 1) {
+  if (!areBookMatched(a, b)) {
     throw new AppError(400, 'not_matched', 'Those slabs are not a book-matched pair: they must be neighbours from the same log.', {
       slabIds: ['Pick two neighbouring slabs from the same log'],
     });

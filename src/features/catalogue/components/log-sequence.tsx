@@ -1,6 +1,6 @@
 import { Link } from 'react-router';
 import type { LogNeighbour } from '../../../../shared/slabs';
-import { STATUS_LABELS } from '../../../../shared/slabs';
+import { areBookMatched, STATUS_LABELS } from '../../../../shared/slabs';
 import { formatCents, toSixteenths } from '../../../../shared/wood/index';
 import { paths } from '../../../paths';
 
@@ -8,12 +8,12 @@ import { paths } from '../../../paths';
  * The slabs cut from the same log, in sawing order. Neighbours next to each other have
  * mirror-image faces (book-matched) and can be paired for a table top.
  */
-export function LogSequence({ neighbours }: { neighbours: LogNeighbour[] }) {
-  const me = neighbours.findIndex((n) => n.isThisSlab);
+export function LogSequence({ logId, neighbours }: { logId: number; neighbours: LogNeighbour[] }) {
+  const me = neighbours.find((n) => n.isThisSlab);
   return (
     <ol className="flex gap-2 overflow-x-auto pb-2" aria-label="Slabs from this log in sawing order">
-      {neighbours.map((n, i) => {
-        const partner = Math.abs(i - me) === 1;
+      {neighbours.map((n) => {
+        const partner = !!me && areBookMatched({ logId, sequenceInLog: me.sequenceInLog }, { logId, sequenceInLog: n.sequenceInLog });
         return (
           <li key={n.id} className={`w-36 shrink-0 rounded-md border p-2 text-sm ${n.isThisSlab ? 'border-accent bg-accent-soft' : 'border-line bg-surface-raised'}`}>
             {n.isThisSlab ? (

@@ -79,7 +79,7 @@ export function SlabPage({ slots = {} }: { slots?: SlabPageSlots }) {
           {SAWING_METHOD_LABELS[slab.log.sawingMethod as keyof typeof SAWING_METHOD_LABELS] ?? slab.log.sawingMethod}
           {slab.log.felledOn && ` · felled ${slab.log.felledOn}`}{slab.log.milledOn && ` · milled ${slab.log.milledOn}`}. {slab.log.originNote}
         </p>
-        <LogSequence neighbours={slab.neighbours} />
+        <LogSequence logId={slab.log.id} neighbours={slab.neighbours} />
       </section>
     </article>
   );

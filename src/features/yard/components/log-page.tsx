@@ -1,4 +1,5 @@
 import { Link } from 'react-router';
+import { areBookMatched } from '../../../../shared/slabs';
 import { useQuery } from '@tanstack/react-query';
 import { SAWING_METHOD_LABELS } from '../../../../shared/slabs';
 import { YARD_STATUS_LABELS } from '../../../../shared/slab-input';
@@ -12,11 +13,6 @@ import { logDetailQuery } from '../api';
 import { CutPlanPanel } from './cut-plan-panel';
 import { LogForm } from './log-form';
 
-const SAME_THICKNESS_IN = 1 / 16;
-
-/** Consecutive slabs of one thickness open like a book: the yard sells them as a matched pair. */
-const bookMatches = (a: LogSlab, b: LogSlab) =>
-  b.sequenceInLog === a.sequenceInLog + 1 && Math.abs(a.thicknessIn - b.thicknessIn) <= SAME_THICKNESS_IN;
 
 export function LogPage({ id }: { id: number }) {
   const { data: log } = useQuery(logDetailQuery(id));
@@ -50,8 +46,8 @@ export function LogPage({ id }: { id: number }) {
                   <span>{formatCents(s.priceCents)}</span>
                   <Tag tone={s.status === 'listed' ? 'moss' : s.status === 'withdrawn' ? 'danger' : 'neutral'}>{YARD_STATUS_LABELS[s.status]}</Tag>
                 </div>
-                {log.slabs[i + 1] && bookMatches(s, log.slabs[i + 1]) && (
-                  <p className="ml-11 border-l-2 border-accent pl-2 text-sm text-accent-strong">Book-matches the next slab (same thickness, sawn side by side)</p>
+                {log.slabs[i + 1] && areBookMatched({ logId: id, sequenceInLog: s.sequenceInLog }, { logId: id, sequenceInLog: log.slabs[i + 1].sequenceInLog }) && (
+                  <p className="ml-11 border-l-2 border-accent pl-2 text-sm text-accent-strong">Book-matches the next slab (sawn side by side)</p>
                 )}
               </li>
             ))}
