@@ -6,6 +6,9 @@ import { SlabPage } from '../features/catalogue/components/slab-page';
 import { FitCheck } from '../features/wood-advice/components/fit-check';
 import { FlatteningEstimatePanel } from '../features/wood-advice/components/flattening-estimate';
 import { ReserveButton } from '../features/reservations/components/reserve-button';
+import { meQuery } from '../features/session/api';
+import { Link } from 'react-router';
+import { paths } from '../paths';
 
 export async function slabLoader({ params }: LoaderFunctionArgs) {
   await queryClient.ensureQueryData(slabDetailQuery(Number(params.slabId)));
@@ -30,7 +33,27 @@ function SlabActions({ slabId }: { slabId: number }) {
   if (!slab) return null;
   const neighbour = slab.neighbours.find((n) => !n.isThisSlab && n.status === 'listed' && n.sequenceInLog === slab.sequenceInLog + 1)
     ?? slab.neighbours.find((n) => !n.isThisSlab && n.status === 'listed' && n.sequenceInLog === slab.sequenceInLog - 1);
-  return <ReserveButton slabId={slab.id} slabCode={slab.code} status={slab.status} matchedNeighbour={neighbour ? { id: neighbour.id, code: neighbour.code } : null} />;
+  return (
+    <>
+      <ReserveButton slabId={slab.id} slabCode={slab.code} status={slab.status} matchedNeighbour={neighbour ? { id: neighbour.id, code: neighbour.code } : null} />
+      <StaffLinks slabId={slab.id} />
+    </>
+  );
+}
+
+/** Mill staff looking at the public page can jump to the slab's record, photos and readings. */
+function StaffLinks({ slabId }: { slabId: number }) {
+  const { data: me } = useQuery(meQuery());
+  if (!me || (me.role !== 'seller' && me.role !== 'admin')) return null;
+  const link = 'text-accent underline';
+  return (
+    <p className="flex flex-wrap gap-x-4 text-sm">
+      <span className="font-semibold">Yard desk:</span>
+      <Link className={link} to={paths.yardSlab(slabId)}>Edit slab</Link>
+      <Link className={link} to={paths.yardSlabPhotos(slabId)}>Photos</Link>
+      <Link className={link} to={paths.yardSlabReadings(slabId)}>Moisture readings</Link>
+    </p>
+  );
 }
 
 export function SlabRoute() {
