@@ -22,6 +22,7 @@ import { authGate } from './modules/accounts/auth-gate';
 import { logRoutes } from './modules/logs/logs.routes';
 import { yardSlabRoutes } from './modules/slabs/yard-slabs.routes';
 import { officeRoutes } from './modules/office/office.routes';
+import { millRulesRoutes } from './modules/mill-rules/mill-rules.routes';
 import { readingRoutes } from './modules/readings/readings.routes';
 
 export type AppDeps = {
@@ -87,6 +88,7 @@ export function createApp(deps: AppDeps) {
   api.use(yardSlabRoutes(deps));
   api.use(readingRoutes(deps));
   api.use(officeRoutes(deps));
+  api.use(millRulesRoutes(deps));
   api.use(apiNotFound);
   app.use('/api', api);
 

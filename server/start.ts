@@ -10,6 +10,7 @@ import { startLocalFakes, type LocalFakes } from './lib/local-fakes';
 import { authSecret } from './lib/dev-secret';
 import { createApp } from './app';
 import { seedDemo } from './seed/seed-demo';
+import { ensureMillSettings } from './modules/mill-rules/mill-rules.service';
 import { startBackgroundJobs } from './jobs';
 
 export type StartOptions = { env: Env; dev?: boolean; log?: (msg: string) => void };
@@ -53,6 +54,7 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
   if (env.SEED_DEMO === 'true') {
     await seedDemo({ db: database.db, auth, uploadsDir: env.UPLOADS_DIR, log: (m: string) => log(`[seed] ${m}`) });
   }
+  await ensureMillSettings(database.db);
 
   const payments = createPayments({ secretKey: env.STRIPE_SECRET_KEY, ...stripe, webhookSecret: env.STRIPE_WEBHOOK_SECRET });
   const app = createApp({

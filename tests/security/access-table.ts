@@ -29,6 +29,8 @@ export const ACCESS: Record<string, Access> = {
   'GET /api/pickup-slots': 'signed-in',
   'GET /api/pickup-settings': 'admin',
   'PUT /api/pickup-settings': 'admin',
+  'GET /api/office/mill-rules': 'admin',
+  'PUT /api/office/mill-rules': 'admin',
   'GET /api/logs': 'staff',
   'POST /api/logs': 'staff',
   'GET /api/logs/:id': 'staff',

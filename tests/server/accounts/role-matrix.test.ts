@@ -64,6 +64,8 @@ const MATRIX: Row[] = [
   ['get', '/api/office/audit', ADMIN],
   ['get', '/api/pickup-settings', ADMIN],
   ['put', '/api/pickup-settings', ADMIN],
+  ['get', '/api/office/mill-rules', ADMIN],
+  ['put', '/api/office/mill-rules', ADMIN],
   // the auth library's own admin endpoints
   ['get', '/api/auth/admin/list-users', ADMIN],
 ];
