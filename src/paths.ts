@@ -43,4 +43,5 @@ export const paths = {
   officeAudit: (query?: Query) => withQuery('/office/audit', query),
   officeNumbers: () => '/office/numbers',
   officeSettings: () => '/office/settings',
+  officeRules: () => '/office/rules',
 } as const;

@@ -53,6 +53,7 @@ export const router = createBrowserRouter([
           { path: 'office/audit', lazy: () => import('./routes/office-audit') },
           { path: 'office/numbers', lazy: () => import('./routes/office-numbers') },
           { path: 'office/settings', lazy: () => import('./routes/office-settings') },
+          { path: 'office/rules', lazy: () => import('./routes/office-rules') },
           { path: '*', loader: () => { throw new Response('Not found', { status: 404 }); } },
         ],
       },

@@ -86,7 +86,7 @@ describe('accessibility of the main pages (axe-core, serious and critical only)'
     await signInQuietly(context, app.url, demoAccount('admin'));
     const reports: string[] = [];
     await journey(page, 'accessibility-office', async () => {
-      for (const path of ['/office', '/office/pickups', '/office/orders', '/office/holds', '/office/users', '/office/audit', '/office/settings']) {
+      for (const path of ['/office', '/office/pickups', '/office/orders', '/office/holds', '/office/users', '/office/audit', '/office/settings', '/office/rules']) {
         reports.push(await scan(page, path, { guarded: true }));
       }
     });

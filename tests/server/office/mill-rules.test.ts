@@ -14,7 +14,7 @@ const rules = (over: Record<string, unknown> = {}) => ({
   maxReadingAgeDays: 45, minimumChargeCents: 0, thickPremiumMinIn: 3, thickPremiumMultiplier: 1,
   flatteningCentsPerSqFt: 500, noShowRule: 'keep', speciesRates: {}, figurePremiums: {}, ...over,
 });
-const put = (agent: ReturnType<typeof request.agent>, body: unknown) => agent.put('/api/office/mill-rules').set('Origin', TEST_ORIGIN).send(body);
+const put = (agent: ReturnType<typeof request.agent>, body: object) => agent.put('/api/office/mill-rules').set('Origin', TEST_ORIGIN).send(body);
 
 beforeAll(async () => {
   t = await createTestApp();

@@ -10,6 +10,7 @@ const LINKS = [
   { to: paths.officeAudit(), label: 'Change log' },
   { to: paths.officeNumbers(), label: 'Numbers' },
   { to: paths.officeSettings(), label: 'Pickup settings' },
+  { to: paths.officeRules(), label: 'Prices and rules' },
 ];
 
 const cls = ({ isActive }: { isActive: boolean }) =>
