@@ -9,7 +9,7 @@ import type { checkoutSchema } from '../../../shared/checkout';
 import type { z } from 'zod';
 import { loadPricingRules } from '../pricing/pricing.service';
 import { withReadingsAndCovers, closeHolds } from '../holds/holds.repo';
-import { quoteSlab } from '../holds/slab-quote';
+import { quoteSlab } from '../pricing/slab-quote';
 import { isUniqueViolation } from '../holds/unique-violation';
 import { claimPickupPlace } from '../pickups/pickups.service';
 import { orderEmailInput, orderView } from './order-view';

@@ -12,7 +12,7 @@ import { roundBoardFeet } from '../../../shared/wood/index';
 import { readMillSettings } from '../pricing/pricing.repo';
 import { loadPricingRules } from '../pricing/pricing.service';
 import { isUniqueViolation } from './unique-violation';
-import { quoteSlab } from './slab-quote';
+import { quoteSlab } from '../pricing/slab-quote';
 import * as repo from './holds.repo';
 
 export type HoldOptions = { holdHours?: number; now?: Date };

@@ -2,9 +2,8 @@ import type { Tx } from '../../db/client';
 import { AppError, notFound, validationError, zodFieldErrors } from '../../lib/errors';
 import { parseSlabListQuery, PUBLIC_STATUSES, type SlabDetail, type SlabListItem, type SlabListResponse, type SlabStatus } from '../../../shared/slabs';
 import { photoUrls } from '../../../shared/photos';
-import {
-  airDryReadyDate, DEFAULT_AIR_DRY_MC, lifting, roundBoardFeet, slabPriceBreakdown, slabWeightLb,
-} from '../../../shared/wood/index';
+import { airDryReadyDate, lifting, roundBoardFeet } from '../../../shared/wood/index';
+import { quoteSlab } from '../pricing/slab-quote';
 import { loadPricingRules } from '../pricing/pricing.service';
 import { readMillSettings } from '../pricing/pricing.repo';
 import * as repo from './catalogue.repo';
@@ -46,15 +45,7 @@ export async function getSlabDetail(db: Tx, id: number, { includeHidden = false 
     loadPricingRules(db), readMillSettings(db),
   ]);
   const latest = readings.at(-1) ?? null;
-  const weightAtMcPercent = latest?.mcPercent ?? DEFAULT_AIR_DRY_MC;
-  const weightLb = slabWeightLb({ speciesSlug: species.slug, thicknessIn: slab.thicknessIn, widthIn: slab.widthIn, lengthIn: slab.lengthIn, mcPercent: weightAtMcPercent });
-  const priceInput = {
-    thicknessIn: slab.thicknessIn, widthIn: slab.widthIn, lengthIn: slab.lengthIn,
-    ratePerBoardFootCents: species.ratePerBoardFootCents, figures: slab.figures,
-    overrideCents: slab.priceOverrideCents, overrideReason: slab.priceOverrideReason, rules,
-  };
-  const priceBreakdown = slabPriceBreakdown(priceInput);
-  const withFlattening = slabPriceBreakdown({ ...priceInput, withFlattening: true });
+  const quote = quoteSlab(slab, species, latest?.mcPercent ?? null, rules);
   return {
     id: slab.id, code: slab.code,
     species: { slug: species.slug, name: species.name, botanicalName: species.botanicalName, ratePerBoardFootCents: species.ratePerBoardFootCents },
@@ -74,12 +65,12 @@ export async function getSlabDetail(db: Tx, id: number, { includeHidden = false 
     neighbours: sequence
       .filter((n) => includeHidden || PUBLIC_STATUSES.includes(n.status as SlabStatus))
       .map((n) => ({ ...n, status: n.status as SlabStatus, coverThumbUrl: thumb(n.coverKey), isThisSlab: n.id === slab.id, coverKey: undefined })),
-    priceBreakdown,
-    weightLb: Math.round(weightLb),
-    weightAtMcPercent,
-    lifting: lifting({ weightLb }),
+    priceBreakdown: quote.breakdown,
+    weightLb: Math.round(quote.weightLb),
+    weightAtMcPercent: quote.mcPercent,
+    lifting: lifting({ weightLb: quote.weightLb }),
     airDryReadyOn: log.milledOn ? airDryReadyDate({ milledOn: log.milledOn, thicknessIn: slab.thicknessIn }).toISOString().slice(0, 10) : null,
     targetMcPercent: settings?.targetMcPercent ?? 8,
-    flatteningPriceCents: withFlattening.flatteningCents,
+    flatteningPriceCents: quote.flattening.priceCents,
   };
 }
