@@ -14,6 +14,7 @@ export {
 } from './pricing';
 export {
   equilibriumMoistureContent, equilibriumMoistureContentC, moistureContentPercent, FIBER_SATURATION_MC,
+  maxMoistureContentPercent, CELL_WALL_SPECIFIC_GRAVITY,
   type EmcInputF, type EmcInputC, type MoistureContentInput,
 } from './moisture';
 export {

@@ -77,3 +77,16 @@ export function requireMoistureContent(value: number, field: string): number {
   if (value < 0) throw new WoodMathError(`${field} must be 0 % or more (got ${value})`, field);
   return value;
 }
+
+/** Specific gravity of the wood cell wall substance (USDA FPL Wood Handbook FPL-GTR-190, ch. 4). */
+export const CELL_WALL_SPECIFIC_GRAVITY = 1.54;
+
+/**
+ * Maximum moisture content (% oven-dry basis) a species can hold, when every cell cavity is full of
+ * water: M_max = 100 (1.54 − G_b) / (1.54 G_b), G_b = basic specific gravity (Wood Handbook
+ * FPL-GTR-190 ch. 4, maximum moisture content equation). No real reading can exceed it.
+ */
+export function maxMoistureContentPercent(basicSpecificGravity: number): number {
+  requireInRange(basicSpecificGravity, 'basicSpecificGravity', 0.1, 1.4);
+  return (100 * (CELL_WALL_SPECIFIC_GRAVITY - basicSpecificGravity)) / (CELL_WALL_SPECIFIC_GRAVITY * basicSpecificGravity);
+}

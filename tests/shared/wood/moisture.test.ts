@@ -84,3 +84,17 @@ describe('moistureContentPercent (ASTM D4442, oven-dry basis)', () => {
     expect(() => moistureContentPercent({ wetMass: 900, ovenDryMass: 0 })).toThrow(WoodMathError);
   });
 });
+
+describe('maxMoistureContentPercent', () => {
+  it('black walnut (basic SG 0.51) can hold at most about 131 % MC', async () => {
+    const { maxMoistureContentPercent } = await import('../../../shared/wood');
+    // Wood Handbook FPL-GTR-190 ch. 4, maximum moisture content M_max = 100(1.54 − Gb)/(1.54 Gb),
+    // with Gb = 0.51 (ch. 5 tables): 100 × 1.03 / 0.7854 = 131.1 %. Tolerance ±0.1.
+    expect(maxMoistureContentPercent(0.51)).toBeCloseTo(131.1, 1);
+  });
+  it('denser wood holds less water: white oak (Gb 0.60) about 102 %', async () => {
+    const { maxMoistureContentPercent } = await import('../../../shared/wood');
+    // Same equation, Gb = 0.60 (Wood Handbook ch. 5): 100 × 0.94 / 0.924 = 101.7 %.
+    expect(maxMoistureContentPercent(0.6)).toBeCloseTo(101.7, 1);
+  });
+});
