@@ -1,3 +1,4 @@
+import fs from 'node:fs';
 import path from 'node:path';
 import { readEnv } from './env';
 import { startStickerline } from './start';
@@ -6,6 +7,8 @@ import { DEMO_ACCOUNTS } from './seed/demo-data';
 /** `npm start` (built client) and `npm run dev` (Vite with hot reload in front of the API). */
 async function main() {
   const dev = process.argv.includes('--dev');
+  // Settings from a local .env file; anything already in the environment wins.
+  if (fs.existsSync('.env')) process.loadEnvFile('.env');
   const env = readEnv();
   const running = await startStickerline({ env, dev });
   const { fakes, database } = running;

@@ -8,6 +8,7 @@ import { createMailer } from './lib/mail';
 import { createPayments } from './lib/payments';
 import { startLocalFakes, type LocalFakes } from './lib/local-fakes';
 import { authSecret } from './lib/dev-secret';
+import { shopOrigins } from './lib/shop-origins';
 import { createApp } from './app';
 import { seedDemo } from './seed/seed-demo';
 import { ensureMillSettings } from './modules/mill-rules/mill-rules.service';
@@ -34,7 +35,8 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
   fs.mkdirSync(env.UPLOADS_DIR, { recursive: true });
 
   const wantFakes = env.START_LOCAL_FAKES ? env.START_LOCAL_FAKES === 'true' : !production && !env.SMTP_PORT;
-  const fakes = wantFakes ? await startLocalFakes({}) : null;
+  // MAILDEV_WEB_PORT keeps the inbox at one address across restarts (a bookmarked tab keeps working).
+  const fakes = wantFakes ? await startLocalFakes({ mailWebPort: env.MAILDEV_WEB_PORT }) : null;
   const smtpPort = env.SMTP_PORT ?? fakes?.smtpPort ?? 25;
   const stripe = {
     host: env.STRIPE_HOST ?? (fakes ? '127.0.0.1' : undefined),
@@ -47,9 +49,9 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
 
   const publicPort = env.PORT;
   const apiPort = dev ? publicPort + 1 : publicPort;
-  const url = env.PUBLIC_URL ?? `http://localhost:${publicPort}`;
+  const { publicUrl: url, trustedOrigins } = shopOrigins(env);
   const mailer = createMailer({ host: env.SMTP_HOST, port: smtpPort, from: env.MAIL_FROM });
-  const auth = createAuth({ db: database.db, secret: authSecret(env.BETTER_AUTH_SECRET, env.DATA_DIR, production), baseURL: url, mailer });
+  const auth = createAuth({ db: database.db, secret: authSecret(env.BETTER_AUTH_SECRET, env.DATA_DIR, production), baseURL: url, trustedOrigins, mailer });
 
   if (env.SEED_DEMO === 'true') {
     await seedDemo({ db: database.db, auth, uploadsDir: env.UPLOADS_DIR, log: (m: string) => log(`[seed] ${m}`) });
@@ -59,7 +61,7 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
   const payments = createPayments({ secretKey: env.STRIPE_SECRET_KEY, ...stripe, webhookSecret: env.STRIPE_WEBHOOK_SECRET });
   const app = createApp({
     db: database.db, auth, mailer, payments, publicUrl: url, uploadsDir: env.UPLOADS_DIR,
-    clientDir: dev ? undefined : 'dist', trustedOrigins: [url],
+    clientDir: dev ? undefined : 'dist', trustedOrigins, trustProxy: env.TRUST_PROXY,
   });
   const jobs = startBackgroundJobs({ db: database.db, mailer, publicUrl: url });
   const server: Server = await new Promise((resolve) => {
