@@ -67,8 +67,14 @@ export function createApp(deps: AppDeps) {
         },
       },
       crossOriginEmbedderPolicy: false,
+      // Sent below, and only over https: over plain http the header is meaningless and a local run must stay reachable.
+      strictTransportSecurity: false,
     }),
   );
+  app.use((req, res, next) => {
+    if (req.secure) res.setHeader('Strict-Transport-Security', 'max-age=15552000; includeSubDomains');
+    next();
+  });
 
   // The auth library parses its own bodies, so it is mounted before express.json().
   app.use('/api/auth', authGate({ trustedOrigins: deps.trustedOrigins }));

@@ -46,7 +46,12 @@ export const envSchema = z.object({
   STRIPE_PORT: port.optional(),
   STRIPE_PROTOCOL: z.enum(['http', 'https']).optional(),
   STRIPE_WEBHOOK_SECRET: z.string().default('whsec_local_development_only'),
-  SEED_DEMO: z.enum(['true', 'false']).default('true'),
+  /** Write the demo yard into an empty database. Unset means yes outside production; production requires an explicit false. */
+  SEED_DEMO: z.enum(['true', 'false']).optional(),
+  /** Production only: true accepts a test-mode payment key on purpose (a rehearsal shop). */
+  PAYMENTS_TEST_MODE: z.enum(['true', 'false']).optional(),
+  /** Production only: true when a real mail relay listens on this machine (SMTP_HOST on loopback). */
+  SMTP_LOCAL_RELAY: z.enum(['true', 'false']).optional(),
   /** IANA time zone of the yard; pickup windows are wall-clock times there. */
   MILL_TIME_ZONE: z.string().default('UTC').refine((tz) => {
     try { new Intl.DateTimeFormat('en-US', { timeZone: tz }); return true; } catch { return false; }
@@ -55,8 +60,11 @@ export const envSchema = z.object({
 
 export type Env = z.infer<typeof envSchema>;
 
+/** Whether the demo data is written into an empty database. */
+export const wantsDemoData = (env: Env) => (env.SEED_DEMO ?? 'true') === 'true';
+
 export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
-  // An empty value (`PUBLIC_URL=` in an environment file) means "not set", as in .env.example.
+  // An empty line copied from .env.example (`PUBLIC_URL=`) means "not set", not "set to nothing".
   const given = Object.fromEntries(Object.entries(source).filter(([, v]) => v !== undefined && v !== ''));
   const parsed = envSchema.safeParse(given);
   if (!parsed.success) {

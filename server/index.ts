@@ -1,6 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import { readEnv } from './env';
+import { readEnv, wantsDemoData } from './env';
 import { startStickerline } from './start';
 import { DEMO_ACCOUNTS } from './seed/demo-data';
 
@@ -19,7 +19,7 @@ async function main() {
     console.log(`  Payment fake (test mode): http://127.0.0.1:${fakes.stripePort}`);
   }
   console.log(`  Database: ${database.kind === 'postgres' ? 'PostgreSQL server (DATABASE_URL)' : path.resolve(env.DATA_DIR, 'pglite')}`);
-  if (env.NODE_ENV !== 'production' && env.SEED_DEMO === 'true') {
+  if (env.NODE_ENV !== 'production' && wantsDemoData(env)) {
     console.log('  Demo accounts (demo only — change or remove before real use):');
     for (const a of DEMO_ACCOUNTS) console.log(`    ${a.role.padEnd(6)} ${a.email}  /  ${a.password}`);
   }

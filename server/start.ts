@@ -1,7 +1,8 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import type { Server } from 'node:http';
-import type { Env } from './env';
+import { wantsDemoData, type Env } from './env';
+import { configProblems, databaseProblems, refuseIfAny } from './production-checks';
 import { openDatabase, migrateDatabase, type Database } from './db/client';
 import { createAuth } from './lib/auth';
 import { createMailer } from './lib/mail';
@@ -31,8 +32,20 @@ export type Running = {
  */
 export async function startStickerline({ env, dev = false, log = console.log }: StartOptions): Promise<Running> {
   const production = env.NODE_ENV === 'production';
+  // Production refuses the demo's defaults before anything starts (see server/production-checks.ts).
+  const problems = production ? configProblems(env) : [];
   fs.mkdirSync(env.DATA_DIR, { recursive: true });
   fs.mkdirSync(env.UPLOADS_DIR, { recursive: true });
+  if (production) {
+    // The database is opened only to look for demo accounts; nothing is migrated or written before the checks pass.
+    const probe = await openDatabase({ databaseUrl: env.DATABASE_URL, dataDir: path.join(env.DATA_DIR, 'pglite') });
+    try {
+      problems.push(...(await databaseProblems(probe.db)));
+    } finally {
+      await probe.close();
+    }
+    refuseIfAny(problems);
+  }
 
   const wantFakes = env.START_LOCAL_FAKES ? env.START_LOCAL_FAKES === 'true' : !production && !env.SMTP_PORT;
   // MAILDEV_WEB_PORT keeps the inbox at one address across restarts (a bookmarked tab keeps working).
@@ -53,7 +66,7 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
   const mailer = createMailer({ host: env.SMTP_HOST, port: smtpPort, from: env.MAIL_FROM });
   const auth = createAuth({ db: database.db, secret: authSecret(env.BETTER_AUTH_SECRET, env.DATA_DIR, production), baseURL: url, trustedOrigins, mailer });
 
-  if (env.SEED_DEMO === 'true') {
+  if (wantsDemoData(env)) {
     await seedDemo({ db: database.db, auth, uploadsDir: env.UPLOADS_DIR, log: (m: string) => log(`[seed] ${m}`) });
   }
   await ensureMillSettings(database.db);
