@@ -23,14 +23,14 @@ export type CheckoutInput = z.input<typeof checkoutSchema>;
 export const ORDER_STATUSES = ['pending-payment', 'paid', 'picked-up', 'no-show', 'refunded', 'cancelled'] as const;
 export type OrderStatus = (typeof ORDER_STATUSES)[number];
 
-/** What each order status means to a buyer, in Stickerline's words. */
+/** An order's status in Stickerline's words: the one set for the buyer, the office, e-mails and CSV. */
 export const ORDER_STATUS_LABELS: Record<OrderStatus, string> = {
   'pending-payment': 'Payment in progress',
-  paid: 'Paid — waiting at the yard',
+  paid: 'Paid, waiting at the yard',
   'picked-up': 'Collected',
   'no-show': 'Not collected',
   refunded: 'Refunded',
-  cancelled: 'Not completed',
+  cancelled: 'Payment not completed',
 };
 
 export type OrderLineView = {

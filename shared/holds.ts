@@ -6,6 +6,13 @@ export const DEFAULT_HOLD_HOURS = 48;
 
 export const HOLD_STATUSES = ['active', 'released', 'expired', 'converted'] as const;
 export type HoldStatus = (typeof HOLD_STATUSES)[number];
+/** A hold's status in Stickerline's words, for the buyer, the office and e-mails. */
+export const HOLD_STATUS_LABELS: Record<HoldStatus, string> = {
+  active: 'On hold',
+  released: 'Let go',
+  expired: 'Time ran out',
+  converted: 'Bought',
+};
 
 /** A book-matched pair: two neighbouring slabs from the same log, reserved together or not at all. */
 export const matchedSetSchema = z.object({

@@ -1,9 +1,18 @@
 import { z } from 'zod';
+import { ORDER_STATUSES, type OrderStatus } from './checkout';
 
 /** The office (admin) contract: inputs the API parses and the forms validate, plus response shapes. */
 
 export const USER_ROLES = ['buyer', 'seller', 'admin'] as const;
 export type UserRole = (typeof USER_ROLES)[number];
+/** A role in Stickerline's words; "buyer" is the one word for the people who buy (never "customer"). */
+export const USER_ROLE_LABELS: Record<UserRole, string> = { buyer: 'Buyer', seller: 'Yard staff', admin: 'Office' };
+/** What a role lets a person do, said before the office changes it. */
+export const USER_ROLE_DESCRIPTIONS: Record<UserRole, string> = {
+  buyer: 'They can reserve and buy slabs, and nothing more.',
+  seller: 'They can record logs, slabs, photos and readings at the yard desk.',
+  admin: 'They can run pickups, refunds, holds, prices and everyone\'s roles.',
+};
 
 const emptyToUndefined = (raw: Record<string, unknown>) =>
   Object.fromEntries(Object.entries(raw).map(([k, v]) => [k, v === '' ? undefined : v]));
@@ -46,8 +55,8 @@ export type AuditEntryView = {
 export type AuditPage = { items: AuditEntryView[]; total: number; page: number; pageSize: number; actions: string[]; entityTypes: string[] };
 
 // --- orders & refunds ------------------------------------------------------------------------
-export const ORDER_STATUSES = ['pending-payment', 'paid', 'picked-up', 'no-show', 'refunded', 'cancelled'] as const;
-export type OrderStatus = (typeof ORDER_STATUSES)[number];
+// One order state list, kept with its words in shared/checkout.ts.
+export { ORDER_STATUSES, ORDER_STATUS_LABELS, type OrderStatus } from './checkout';
 
 export const orderListQuerySchema = z.object({
   status: z.enum(ORDER_STATUSES, { error: 'Unknown order status' }).optional(),
@@ -100,6 +109,8 @@ export const rescheduleSchema = z.object({
 export type RescheduleInput = z.infer<typeof rescheduleSchema>;
 
 export type PickupOrder = {
+  /** The booked window has begun at the mill: only then can the office record that the buyer did not come. */
+  pickupStarted: boolean;
   id: number; code: string; status: OrderStatus; buyerName: string; buyerEmail: string; slabCodes: string[];
   totalWeightLb: number; longestSlabIn: number; loadingHelp: boolean; pickedUpAt: string | null;
 };

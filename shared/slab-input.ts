@@ -30,17 +30,6 @@ export const SLAB_TRANSITIONS: Record<SlabStatus, readonly SlabStatus[]> = {
   withdrawn: ['drying', 'ready'],
 };
 
-/** Status names as the yard crew reads them (buyers see their own wording on the slab page). */
-export const YARD_STATUS_LABELS: Record<SlabStatus, string> = {
-  drying: 'Drying on sticks',
-  ready: 'Dry, not yet for sale',
-  listed: 'For sale',
-  held: 'Held for a buyer',
-  sold: 'Sold, awaiting pickup',
-  'picked-up': 'Collected',
-  withdrawn: 'Withdrawn',
-};
-
 export const STAFF_SET_STATUSES: readonly SlabStatus[] = ['drying', 'ready', 'listed', 'withdrawn'];
 
 /** Whether a seller or admin may move a slab from `from` to `to` by editing it. */

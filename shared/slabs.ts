@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { parseInches } from './wood/format';
+import { DRYING_STATES, type DryingState } from './wood/drying';
 
 export const SLAB_STATUSES = ['drying', 'ready', 'listed', 'held', 'sold', 'picked-up', 'withdrawn'] as const;
 export type SlabStatus = (typeof SLAB_STATUSES)[number];
@@ -32,7 +33,10 @@ export const SLAB_SORT_LABELS: Record<(typeof SLAB_SORTS)[number], string> = {
   'board-feet-asc': 'Fewest board feet',
 };
 
-const DRYING_STATE_VALUES = ['green', 'air-drying', 'air-dry', 'shop-dry'] as const;
+const DRYING_STATE_VALUES = ['green', 'air-drying', 'air-dry', 'shop-dry'] as const satisfies readonly DryingState[];
+
+/** A drying state's words (the list and its words live together in shared/wood/drying.ts). */
+export const dryingStateLabel = (state: string) => DRYING_STATES.find((s) => s.state === state)?.label ?? 'Not measured yet';
 
 const emptyToUndefined = (v: unknown) => (v === '' ? undefined : v);
 
@@ -162,13 +166,16 @@ export type SlabDetail = Omit<SlabListItem, 'species'> & {
   flatteningPriceCents: number;
 };
 
-/** What each status means to a buyer, in Stickerline's words. */
-export const STATUS_LABELS: Record<SlabStatus, string> = {
+/**
+ * A slab's status in Stickerline's words: the one set for buyer pages, the yard desk, the office,
+ * e-mails and CSV files (tests/shared/state-labels.test.ts fails when a screen keeps its own).
+ */
+export const SLAB_STATUS_LABELS: Record<SlabStatus, string> = {
   drying: 'Still drying',
-  ready: 'Dry — being readied',
+  ready: 'Dry, not yet for sale',
   listed: 'For sale',
   held: 'On hold for a buyer',
-  sold: 'Sold',
+  sold: 'Sold, not yet collected',
   'picked-up': 'Sold and collected',
   withdrawn: 'Withdrawn',
 };

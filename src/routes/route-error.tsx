@@ -4,7 +4,7 @@ import { paths } from '../paths';
 import { PageTitle } from '../components/ui/page-title';
 
 const MESSAGES: Record<number, [string, string]> = {
-  401: ['Please sign in', 'This page is for signed-in customers and staff.'],
+  401: ['Please sign in', 'This page is for signed-in buyers and staff.'],
   403: ['Not for this account', 'Your account cannot open this page. If you work at the mill, ask an admin to change your role.'],
   404: ['Not found', 'We could not find that page or slab. It may have been sold and collected, or withdrawn.'],
   409: ['Someone got there first', 'That slab was just reserved or bought by someone else.'],

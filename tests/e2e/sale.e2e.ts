@@ -67,10 +67,11 @@ describe.sequential('selling a slab, from a visitor to the office', () => {
 
       await second.page.getByRole('button', { name: 'Reserve this slab' }).click();
       await expect.poll(() => second.page.getByRole('alert').textContent()).toContain('Someone else is holding this slab right now.');
-      // Looking again, the page says who has it in plain words and offers no Reserve button.
-      await second.page.reload();
+      // Without a reload the page catches up: the badge says who has it, the Reserve button goes,
+      // and the reason says when the slab may come back on sale.
       await second.page.getByText('On hold for a buyer', { exact: true }).first().waitFor();
       expect(await second.page.getByRole('button', { name: 'Reserve this slab' }).count()).toBe(0);
+      expect(await second.page.getByRole('alert').textContent()).toMatch(/comes back on sale after \w{3} \d{1,2} \w{3} \d{4}, \d{2}:\d{2}/);
 
       // The holder goes on to pay; the office refunds part of this order later.
       const order = await checkOutHeldSlabs(first.page, [slab.code]);

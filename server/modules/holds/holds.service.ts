@@ -1,4 +1,6 @@
 import { randomUUID } from 'node:crypto';
+import { formatDateTime } from '../../../shared/dates';
+import { millTimeZone } from '../pickups/slot-calendar';
 import { areBookMatched } from '../../../shared/slabs';
 import type { Db, Tx } from '../../db/client';
 import { AppError, notFound } from '../../lib/errors';
@@ -17,7 +19,10 @@ import * as repo from './holds.repo';
 
 export type HoldOptions = { holdHours?: number; now?: Date };
 
-const HELD_BY_OTHER = 'This slab is already on hold for another buyer.';
+const HELD_BY_OTHER = 'Someone else is holding this slab right now.';
+/** When the other buyer's hold runs out, in the mill's words and clock. */
+const heldByOtherUntil = (expiresAt: Date) =>
+  `${HELD_BY_OTHER} If they do not buy it, it comes back on sale after ${formatDateTime(expiresAt, millTimeZone())} (mill time).`;
 
 async function holdHoursFor(tx: Tx, override?: number) {
   if (override !== undefined) return override;
@@ -32,7 +37,7 @@ async function refusal(tx: Tx, slabId: number, buyerId: string): Promise<AppErro
     const hold = await repo.findActiveHoldOnSlab(tx, slabId);
     return hold?.buyerId === buyerId
       ? new AppError(409, 'already_yours', `You already hold slab ${slab.code}.`)
-      : new AppError(409, 'slab_held', HELD_BY_OTHER);
+      : new AppError(409, 'slab_held', hold ? heldByOtherUntil(hold.expiresAt) : HELD_BY_OTHER);
   }
   if (slab.status === 'sold' || slab.status === 'picked-up') return new AppError(409, 'slab_sold', `Slab ${slab.code} is already sold.`);
   return new AppError(409, 'not_for_sale', `Slab ${slab.code} is not for sale yet.`);

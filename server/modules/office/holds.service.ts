@@ -1,4 +1,5 @@
 import type { Db } from '../../db/client';
+import { HOLD_STATUS_LABELS, type HoldStatus } from '../../../shared/holds';
 import { AppError, notFound } from '../../lib/errors';
 import { recordAudit } from '../../lib/audit';
 import type { SessionUser } from '../../lib/session';
@@ -15,7 +16,7 @@ export async function releaseHold(db: Db, actor: SessionUser, id: number) {
   return db.transaction(async (tx) => {
     const hold = await repo.findHoldForUpdate(tx, id);
     if (!hold) throw notFound('That hold');
-    if (hold.status !== 'active') throw new AppError(409, 'hold_not_active', `That hold is already ${hold.status}; nothing to release.`);
+    if (hold.status !== 'active') throw new AppError(409, 'hold_not_active', `That hold has already ended (${HOLD_STATUS_LABELS[hold.status as HoldStatus].toLowerCase()}); nothing to release.`);
     await repo.closeHold(tx, id, actor.id);
     const relisted = await repo.relistHeldSlab(tx, hold.slabId);
     await recordAudit(tx, {

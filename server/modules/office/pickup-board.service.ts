@@ -1,4 +1,6 @@
 import { randomUUID } from 'node:crypto';
+import { ORDER_STATUS_LABELS } from '../../../shared/checkout';
+import { formatDay } from '../../../shared/dates';
 import type { Db } from '../../db/client';
 import { AppError, notFound } from '../../lib/errors';
 import { recordAudit } from '../../lib/audit';
@@ -36,18 +38,20 @@ export async function pickupBoard(db: Db, q: { from?: string; days: number }, no
       ...dayOrders.map((r) => r.order.pickupWindowId).filter((id): id is number => id !== null),
     ]);
     const slots: PickupSlot[] = windows.filter((w) => windowIds.has(w.id)).sort((a, b) => a.startsAt.localeCompare(b.startsAt)).map((w) => ({
-      window: view(w), orders: dayOrders.filter((r) => r.order.pickupWindowId === w.id).map((r) => toPickupOrder(r, lines)),
+      window: view(w), orders: dayOrders.filter((r) => r.order.pickupWindowId === w.id).map((r) => toPickupOrder(r, lines, windowStart(date, w.startsAt) <= now)),
     }));
     const loose = dayOrders.filter((r) => r.order.pickupWindowId === null || !windowIds.has(r.order.pickupWindowId));
-    if (loose.length) slots.push({ window: null, orders: loose.map((r) => toPickupOrder(r, lines)) });
+    if (loose.length) slots.push({ window: null, orders: loose.map((r) => toPickupOrder(r, lines, windowStart(date, '00:00') <= now)) });
     dates.push({ date, closed: Boolean(closedDay), closedNote: closedDay?.note ?? '', slots });
   }
   return { from, days: q.days, noShowRule, windows: windows.filter((w) => w.active).map(view), dates };
 }
 
 type OrderRow = Awaited<ReturnType<typeof repo.ordersForPickup>>[number];
-function toPickupOrder({ order, buyerName, buyerEmail }: OrderRow, lines: Awaited<ReturnType<typeof repo.linesOf>>): PickupOrder {
+/** `started`: the booked window has begun at the mill, so "did not come" can be recorded (the same rule markNoShow checks). */
+function toPickupOrder({ order, buyerName, buyerEmail }: OrderRow, lines: Awaited<ReturnType<typeof repo.linesOf>>, started: boolean): PickupOrder {
   return {
+    pickupStarted: started,
     id: order.id, code: order.code, status: order.status as OrderStatus, buyerName, buyerEmail,
     slabCodes: lines.filter((l) => l.line.orderId === order.id && l.line.status === 'sold').map((l) => l.line.slabCode),
     totalWeightLb: order.totalWeightLb, longestSlabIn: order.longestSlabIn, loadingHelp: order.loadingHelp, pickedUpAt: order.pickedUpAt?.toISOString() ?? null,
@@ -63,7 +67,7 @@ export async function markPickedUp(db: Db, actor: SessionUser, orderId: number, 
     const order = await repo.lockOrder(tx, orderId);
     if (!order) throw notFound('That order');
     if (order.status !== 'paid' && order.status !== 'no-show') {
-      throw new AppError(409, 'not_awaiting_pickup', `Order ${order.code} is ${order.status}; only a paid order waiting at the yard can be marked picked up.`);
+      throw new AppError(409, 'not_awaiting_pickup', `Order ${order.code} is “${ORDER_STATUS_LABELS[order.status as OrderStatus]}”; only a paid order waiting at the yard can be marked picked up.`);
     }
     const slabIds = await soldSlabIds(tx, orderId);
     await repo.updateOrder(tx, orderId, { status: 'picked-up', pickedUpAt: now, pickedUpBy: actor.id });
@@ -84,10 +88,10 @@ export async function markNoShow(deps: RefundDeps, actor: SessionUser, orderId: 
   const order = await db.transaction(async (tx) => {
     const o = await repo.lockOrder(tx, orderId);
     if (!o) throw notFound('That order');
-    if (o.status !== 'paid') throw new AppError(409, 'not_awaiting_pickup', `Order ${o.code} is ${o.status}; only a paid order waiting at the yard can be marked as a no-show.`);
+    if (o.status !== 'paid') throw new AppError(409, 'not_awaiting_pickup', `Order ${o.code} is “${ORDER_STATUS_LABELS[o.status as OrderStatus]}”; only a paid order waiting at the yard can be marked as not collected.`);
     const window = await repo.findWindow(tx, o.pickupWindowId);
     if (o.pickupOn && windowStart(o.pickupOn, window?.startsAt ?? '00:00') > now) {
-      throw new AppError(409, 'too_early', `The pickup for order ${o.code} has not started yet (${o.pickupOn}).`);
+      throw new AppError(409, 'too_early', `The pickup for order ${o.code} has not started yet (${formatDay(o.pickupOn)}).`);
     }
     await repo.updateOrder(tx, orderId, { status: 'no-show' });
     await recordAudit(tx, { actor, action: 'order.no-show', entityType: 'order', entityId: orderId, before: { status: o.status }, after: { status: 'no-show', rule } });
@@ -102,7 +106,7 @@ export async function markNoShow(deps: RefundDeps, actor: SessionUser, orderId: 
       }, { keepStatus: 'no-show' });
     } catch (err) {
       const why = err instanceof AppError ? err.message : 'the payment service did not answer';
-      throw new AppError(502, 'no_show_refund_failed', `Order ${order.code} is marked as a no-show, but the refund did not go through (${why}). Refund it from the order page.`);
+      throw new AppError(502, 'no_show_refund_failed', `Order ${order.code} is marked as not collected, but the refund did not go through (${why}). Refund it from the order page.`);
     }
   }
   return { rule, order: await getOrderDetail(db, orderId) };
@@ -115,7 +119,7 @@ export async function reschedulePickup(deps: RefundDeps, actor: SessionUser, ord
     const order = await repo.lockOrder(tx, orderId);
     if (!order) throw notFound('That order');
     if (order.status !== 'paid' && order.status !== 'no-show') {
-      throw new AppError(409, 'not_awaiting_pickup', `Order ${order.code} is ${order.status}; only an order still waiting at the yard can be rescheduled.`);
+      throw new AppError(409, 'not_awaiting_pickup', `Order ${order.code} is “${ORDER_STATUS_LABELS[order.status as OrderStatus]}”; only an order still waiting at the yard can be rescheduled.`);
     }
     if (order.pickupWindowId === input.pickupWindowId && order.pickupOn === input.pickupOn && order.status === 'paid') {
       throw new AppError(400, 'validation', 'The order is already booked for that time.', { pickupOn: ['Choose a different day or window.'] });

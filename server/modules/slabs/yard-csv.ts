@@ -1,4 +1,5 @@
-import { formatCents } from '../../../shared/wood/index';
+import { centsAsPlainDollars } from '../../../shared/wood/index';
+import { dryingStateLabel, LIVE_EDGE_LABELS, SLAB_STATUS_LABELS, type SlabStatus } from '../../../shared/slabs';
 import type { YardSlabRow } from '../../../shared/slab-input';
 
 /**
@@ -14,10 +15,11 @@ export function csvField(value: string | number | null | undefined): string {
 
 const COLUMNS: [string, (r: YardSlabRow) => string | number | null][] = [
   ['Code', (r) => r.code], ['Species', (r) => r.species.name], ['Log', (r) => r.logCode], ['Sequence', (r) => r.sequenceInLog],
-  ['Status', (r) => r.status], ['Drying state', (r) => r.dryingState], ['Thickness (in)', (r) => r.thicknessIn],
+  // The same words as the screens; numbers stay plain numbers so a spreadsheet can add them up.
+  ['Status', (r) => SLAB_STATUS_LABELS[r.status as SlabStatus] ?? r.status], ['Drying state', (r) => dryingStateLabel(r.dryingState)], ['Thickness (in)', (r) => r.thicknessIn],
   ['Average width (in)', (r) => r.widthIn], ['Widths (in)', (r) => r.widthsIn.join(' ')], ['Length (in)', (r) => r.lengthIn],
-  ['Board feet', (r) => r.boardFeet], ['Price', (r) => formatCents(r.priceCents)], ['Price set by hand', (r) => (r.priceOverrideCents === null ? '' : 'yes')],
-  ['Stack', (r) => r.yardStack], ['Position', (r) => r.yardPosition], ['Live edge', (r) => r.liveEdge], ['Figures', (r) => r.figures.join(' ')],
+  ['Board feet', (r) => r.boardFeet], ['Price ($)', (r) => centsAsPlainDollars(r.priceCents)], ['Price set by hand', (r) => (r.priceOverrideCents === null ? '' : 'yes')],
+  ['Stack', (r) => r.yardStack], ['Position', (r) => r.yardPosition], ['Edges', (r) => LIVE_EDGE_LABELS[r.liveEdge as keyof typeof LIVE_EDGE_LABELS] ?? r.liveEdge], ['Figures', (r) => r.figures.join(' ')],
   ['Moisture %', (r) => r.moisturePercent], ['Last reading', (r) => r.lastReadingOn], ['Photos', (r) => r.photoCount], ['Listed at', (r) => r.listedAt],
 ];
 

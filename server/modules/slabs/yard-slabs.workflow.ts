@@ -1,8 +1,8 @@
 import type { Tx } from '../../db/client';
 import { AppError } from '../../lib/errors';
 import { readMillSettings } from '../pricing/pricing.repo';
-import { canStaffMove, SLAB_TRANSITIONS, YARD_STATUS_LABELS as STATUS_LABELS } from '../../../shared/slab-input';
-import type { SlabStatus } from '../../../shared/slabs';
+import { canStaffMove, SLAB_TRANSITIONS } from '../../../shared/slab-input';
+import { SLAB_STATUS_LABELS as STATUS_LABELS, type SlabStatus } from '../../../shared/slabs';
 import * as repo from './yard-slabs.repo';
 
 const DAY_MS = 86_400_000;
@@ -16,7 +16,7 @@ export function assertStaffMove(from: SlabStatus, to: SlabStatus) {
     : legal.length
       ? `From “${STATUS_LABELS[from]}” a slab can go to: ${legal.map((s) => `“${STATUS_LABELS[s]}”`).join(', ')}.`
       : `A slab that is “${STATUS_LABELS[from]}” cannot be changed here.`;
-  const message = `A slab cannot go from ${from} to ${to}. ${why}`;
+  const message = `A slab cannot go from “${STATUS_LABELS[from]}” to “${STATUS_LABELS[to]}”. ${why}`;
   throw new AppError(409, 'illegal_transition', message, { status: [message] });
 }
 

@@ -25,7 +25,8 @@ export function useHoldSlab() {
   const invalidate = useInvalidateAfterHold();
   return useMutation({
     mutationFn: (slabId: number) => apiFetch<{ hold: Created }>(`/api/slabs/${slabId}/hold`, { method: 'POST' }),
-    onSuccess: invalidate,
+    // A refusal means the slab changed under the buyer: refresh its badge and buttons too.
+    onSettled: invalidate,
   });
 }
 
@@ -33,7 +34,7 @@ export function useHoldPair() {
   const invalidate = useInvalidateAfterHold();
   return useMutation({
     mutationFn: (slabIds: [number, number]) => apiFetch<{ holds: Created[] }>('/api/holds/matched-set', { method: 'POST', body: { slabIds } }),
-    onSuccess: invalidate,
+    onSettled: invalidate,
   });
 }
 

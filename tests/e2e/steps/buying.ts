@@ -21,7 +21,7 @@ export type BookedOrder = { id: number; code: string; totalCents: number; pickup
  */
 export async function checkOutHeldSlabs(page: Page, codes: string[]): Promise<BookedOrder> {
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'My holds' }).click();
-  await page.getByRole('heading', { level: 1, name: 'Your reservations' }).waitFor();
+  await page.getByRole('heading', { level: 1, name: 'My holds' }).waitFor();
   for (const code of codes) await page.getByRole('link', { name: new RegExp(`slab ${code}$`) }).waitFor();
   await page.getByRole('link', { name: 'Go to checkout' }).click();
 

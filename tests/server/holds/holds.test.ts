@@ -19,7 +19,7 @@ describe('holding a slab', () => {
     const statuses = results.map((r) => r.status);
     expect(statuses.filter((s) => s === 201)).toHaveLength(1);
     expect(statuses.filter((s) => s === 409)).toHaveLength(19);
-    expect(results.find((r) => r.status === 409)!.body.error.message).toMatch(/already on hold for another buyer/);
+    expect(results.find((r) => r.status === 409)!.body.error.message).toMatch(/Someone else is holding this slab right now/);
     expect(await slabStatus(slab.id)).toBe('held');
     expect(await t.db.select().from(holds).where(eq(holds.slabId, slab.id))).toHaveLength(1);
   }, 240_000); // twenty sign-ups hash twenty passwords first
@@ -33,6 +33,21 @@ describe('holding a slab', () => {
     const hours = (Date.parse(res.body.hold.expiresAt) - before) / 3_600_000;
     expect(hours).toBeGreaterThan(23.9);
     expect(hours).toBeLessThan(24.1);
+  });
+
+  it('tells a second buyer, later, when the first hold runs out and the slab may come back on sale', async () => {
+    const slab = await slabRow(t.db, await logRow(t.db, 'black-walnut'));
+    const first = await t.signedInAs('buyer');
+    const second = await t.signedInAs('buyer');
+    const won = await hold(first.agent, slab.id);
+    const refused = await hold(second.agent, slab.id);
+    expect(refused.status).toBe(409);
+    const message: string = refused.body.error.message;
+    expect(message).toMatch(/comes back on sale after \w{3} \d{1,2} \w{3} \d{4}, \d{2}:\d{2} \(mill time\)/);
+    // The time named is the first buyer's expiry, on the mill clock (UTC in tests).
+    const expiry = new Date(won.body.hold.expiresAt);
+    expect(message).toContain(`${String(expiry.getUTCHours()).padStart(2, '0')}:${String(expiry.getUTCMinutes()).padStart(2, '0')}`);
+    expect(message).not.toMatch(/\bheld\b|active|expired/);
   });
 
   it('refuses visitors with 401', async () => {

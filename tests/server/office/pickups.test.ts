@@ -46,6 +46,8 @@ describe('GET /api/office/pickups', () => {
     expect(slot.orders).toEqual([expect.objectContaining({
       id: order.id, code: order.code, buyerName: 'Emrys Tollbright', buyerEmail: buyer.email, slabCodes: [slab.code],
       totalWeightLb: order.totalWeightLb, longestSlabIn: 110, loadingHelp: true, status: 'paid',
+      // Two days ahead: "did not come" is not offered yet.
+      pickupStarted: false,
     })]);
     expect(res.body.noShowRule).toBe('keep');
   });
@@ -101,6 +103,14 @@ describe('POST /api/office/orders/:id/no-show', () => {
     } finally {
       await t.db.update(millSettings).set({ noShowRule: 'keep' }).where(eq(millSettings.id, 1));
     }
+  });
+
+  it('offers "did not come" only once the booked window has begun at the mill', async () => {
+    const yesterday = dayFromNow(-1);
+    const { order } = await orderOn(yesterday);
+    const res = await admin.agent.get(`/api/office/pickups?from=${yesterday}&days=1`);
+    const listed = res.body.dates[0].slots.flatMap((s: { orders: { id: number }[] }) => s.orders).find((o: { id: number }) => o.id === order.id);
+    expect(listed.pickupStarted).toBe(true);
   });
 
   it('refuses to mark a no-show before the pickup day', async () => {

@@ -72,8 +72,11 @@ describe('GET /api/yard/slabs.csv', () => {
     const lines = res.text.trimEnd().split('\r\n');
     expect(lines[0].split(',').slice(0, 3)).toEqual(['Code', 'Species', 'Log']);
     expect(lines).toHaveLength(3);
-    expect(lines[1].startsWith('L-2026-02-1,White oak,L-2026-02,1,listed,')).toBe(true);
-    expect(lines[2]).toContain(',held,');
+    // The screens' words for a status, and the price as a plain number of dollars.
+    expect(lines[1].startsWith('L-2026-02-1,White oak,L-2026-02,1,For sale,')).toBe(true);
+    expect(lines[2]).toContain(',On hold for a buyer,');
+    const priceAt = lines[0].split(',').indexOf('Price ($)');
+    expect(lines[1].split(',')[priceAt]).toMatch(/^\d+\.\d{2}$/);
   });
 
   it('quotes commas, quotes and line breaks, and defuses spreadsheet formulas', () => {

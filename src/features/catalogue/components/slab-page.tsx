@@ -10,7 +10,7 @@ import { MeasurementsTable } from './measurements-table';
 import { PageTitle } from '../../../components/ui/page-title';
 import { Tag } from '../../../components/ui/tag';
 import { paths } from '../../../paths';
-import { STATUS_LABELS, SAWING_METHOD_LABELS } from '../../../../shared/slabs';
+import { SLAB_STATUS_LABELS, SAWING_METHOD_LABELS } from '../../../../shared/slabs';
 import { DRYING_STATES, formatCents } from '../../../../shared/wood/index';
 
 const MoistureChart = lazy(() => import('./moisture-chart'));
@@ -37,7 +37,7 @@ export function SlabPage({ slots = {} }: { slots?: SlabPageSlots }) {
             <p className="text-ink-soft">Slab {slab.code} · <i>{slab.species.botanicalName}</i></p>
             <PageTitle title={`${slab.species.name} slab ${slab.code}`}>{slab.species.name} slab</PageTitle>
             <div className="mt-2 flex flex-wrap gap-2">
-              <Tag tone={slab.status === 'listed' ? 'moss' : slab.status === 'held' ? 'caution' : 'neutral'}>{STATUS_LABELS[slab.status]}</Tag>
+              <Tag tone={slab.status === 'listed' ? 'moss' : slab.status === 'held' ? 'caution' : 'neutral'}>{SLAB_STATUS_LABELS[slab.status]}</Tag>
               {drying && <Tag tone="accent">{drying.label}</Tag>}
             </div>
           </div>

@@ -1,16 +1,15 @@
 import { useQuery } from '@tanstack/react-query';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { PageTitle } from '../../../components/ui/page-title';
-import { formatCents, plainNumber } from '../../../../shared/wood/index';
+import { formatCents, formatDays, plainNumber } from '../../../../shared/wood/index';
 import type { MillNumbers } from '../../../../shared/office';
+import { SLAB_STATUSES, SLAB_STATUS_LABELS, type SlabStatus } from '../../../../shared/slabs';
 import { numbersQuery } from '../api';
 
 // Species colours picked from the theme's wood tones so the stacks stay readable side by side.
 const PALETTE = ['#7a4a24', '#4f6b3a', '#b7832f', '#8c3b2e', '#3f5f6e', '#a0662e', '#5d4a6b', '#6f7d44'];
-const STATUS_LABELS: Record<string, string> = {
-  drying: 'Drying', ready: 'Dry, not listed', listed: 'On sale', held: 'On hold', sold: 'Sold, waiting', 'picked-up': 'Collected', withdrawn: 'Withdrawn',
-};
-const CHARTED_STATUSES = ['drying', 'ready', 'listed', 'held'];
+const CHARTED_STATUSES: SlabStatus[] = ['drying', 'ready', 'listed', 'held'];
+const statusWords = (s: string) => (SLAB_STATUSES as readonly string[]).includes(s) ? SLAB_STATUS_LABELS[s as SlabStatus] : s;
 
 /** One row per month with one column per species: the shape a stacked bar chart wants. */
 function byMonth(sales: MillNumbers['sales'], field: 'boardFeet' | 'revenueCents') {
@@ -25,14 +24,14 @@ export function NumbersPage() {
   const { data } = useQuery(numbersQuery());
   if (!data) return null;
   const species = [...new Set(data.sales.map((s) => s.speciesName))].sort();
-  const counts = CHARTED_STATUSES.map((s) => ({ status: STATUS_LABELS[s], count: data.statusCounts.find((c) => c.status === s)?.count ?? 0 }));
+  const counts = CHARTED_STATUSES.map((s) => ({ status: SLAB_STATUS_LABELS[s], count: data.statusCounts.find((c) => c.status === s)?.count ?? 0 }));
   return (
     <div className="flex flex-col gap-6">
       <PageTitle>The mill's numbers</PageTitle>
       <p className="text-lg">
         {data.averageDaysMilledToSold === null
           ? 'No sold slab has a milling date yet.'
-          : `On average a slab sold ${data.averageDaysMilledToSold} days after its log was milled (over ${data.soldSlabsWithMillDate} sold slabs).`}
+          : `On average a slab sold ${formatDays(data.averageDaysMilledToSold)} after its log was milled (over ${data.soldSlabsWithMillDate} sold slabs).`}
       </p>
       <ChartBox title="Board feet sold per month, by species">
         <BarChart data={byMonth(data.sales, 'boardFeet')}>
@@ -89,7 +88,7 @@ function NumbersTables({ data }: { data: MillNumbers }) {
         <caption className="text-left font-semibold">Slabs by state</caption>
         <thead><tr className="border-b border-line"><th scope="col">State</th><th scope="col">Slabs</th></tr></thead>
         <tbody>
-          {data.statusCounts.map((c) => <tr key={c.status} className="border-b border-line/60"><td>{STATUS_LABELS[c.status] ?? c.status}</td><td>{c.count}</td></tr>)}
+          {data.statusCounts.map((c) => <tr key={c.status} className="border-b border-line/60"><td>{statusWords(c.status)}</td><td>{c.count}</td></tr>)}
         </tbody>
       </table>
     </section>

@@ -8,11 +8,12 @@ import { formatCents } from '../../../../shared/wood/index';
 import { BoardFeet, Length, Weight } from '../../../lib/units';
 import { formatWindow } from '../../../../shared/pickups';
 import { orderQuery } from '../api';
-import { ORDER_STATUS_LABELS } from './order-status';
+import { ORDER_STATUS_LABELS } from '../../../../shared/office';
+import { SLAB_STATUSES, SLAB_STATUS_LABELS, type SlabStatus } from '../../../../shared/slabs';
 import { RefundForm } from './refund-form';
 
 const when = (iso: string) => new Date(iso).toLocaleString();
-const SLAB_STATE: Record<string, string> = { sold: 'Sold', 'picked-up': 'Collected', listed: 'Back on sale', withdrawn: 'Withdrawn', held: 'On hold' };
+const slabStateWords = (s: string) => ((SLAB_STATUSES as readonly string[]).includes(s) ? SLAB_STATUS_LABELS[s as SlabStatus] : s);
 
 export function OrderPage() {
   const id = Number(useParams().orderId);
@@ -45,7 +46,7 @@ export function OrderPage() {
               <Link to={paths.slab(l.slabId)} className="font-semibold text-accent underline">{l.slabCode}</Link>
               <span>{l.speciesName}, <BoardFeet value={l.boardFeet} />, {formatCents(l.totalCents)}</span>
               {l.status === 'refunded' ? <Tag tone="caution">Refunded</Tag> : null}
-              <span className="text-ink-soft">({SLAB_STATE[l.slabStatus] ?? l.slabStatus})</span>
+              <span className="text-ink-soft">({slabStateWords(l.slabStatus)})</span>
             </li>
           ))}
         </ul>

@@ -8,7 +8,7 @@ import { paths } from '../../../paths';
 import { formatCents } from '../../../../shared/wood/index';
 import { ORDER_STATUSES, type OrderStatus } from '../../../../shared/office';
 import { ordersQuery } from '../api';
-import { ORDER_STATUS_LABELS } from './order-status';
+import { ORDER_STATUS_LABELS } from '../../../../shared/office';
 
 export const orderFiltersFrom = (params: URLSearchParams) => ({
   q: params.get('q') ?? undefined,

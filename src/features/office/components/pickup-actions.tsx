@@ -40,7 +40,7 @@ export function PickupActions({ order, windows, noShowRule }: { order: PickupOrd
   return (
     <div className="flex flex-wrap gap-2">
       <Button variant="primary" onClick={() => setAction('picked-up')}>Picked up</Button>
-      {order.status === 'paid' && <Button variant="secondary" onClick={() => setAction('no-show')}>Did not come</Button>}
+      {order.status === 'paid' && order.pickupStarted && <Button variant="secondary" onClick={() => setAction('no-show')}>Did not come</Button>}
       <Button variant="quiet" onClick={() => setAction('reschedule')}>Move pickup</Button>
       <ConfirmDialog open={action !== null} busy={busy} onCancel={close} onConfirm={confirm}
         tone={action === 'no-show' ? 'danger' : 'primary'}

@@ -11,7 +11,7 @@ import { formatWindow, WEEKDAY_NAMES } from '../../../../shared/pickups';
 import type { PickupOrder, PickupBoard } from '../../../../shared/office';
 import { pickupsQuery } from '../api';
 import { PickupActions } from './pickup-actions';
-import { ORDER_STATUS_LABELS } from './order-status';
+import { ORDER_STATUS_LABELS } from '../../../../shared/office';
 
 const shift = (day: string, n: number) => new Date(Date.parse(`${day}T00:00:00Z`) + n * 86_400_000).toISOString().slice(0, 10);
 

@@ -6,18 +6,21 @@ import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
 import { ApiError, friendlyMessage } from '../../../lib/api-client';
-import { formatCents } from '../../../../shared/wood/index';
+import { centsAsPlainDollars, formatCents, parseDollarsToCents } from '../../../../shared/wood/index';
 import { REFUND_REASON_MAX, RETURN_SLABS_TO, createRefundSchema, type OrderDetail } from '../../../../shared/office';
 import { useRefund } from '../api';
 import { ConfirmDialog } from './confirm-dialog';
 
+/** A dollar amount as typed ("$1,000", "1000.50"), read by the shared money parser. */
+const readableDollars = (v: string) => { try { parseDollarsToCents(v); return true; } catch { return false; } };
+
 // The person types dollars; the API takes cents. The rest of the rules are the shared schema's.
 const formSchema = createRefundSchema.omit({ amountCents: true }).extend({
-  amountDollars: z.string().trim().regex(/^\d+(\.\d{1,2})?$/, 'Enter an amount like 125 or 125.50'),
+  amountDollars: z.string().trim().min(1, 'Enter an amount').refine(readableDollars, 'Enter an amount like 125, 125.50 or $1,250'),
   slabIds: z.array(z.string()).default([]),
 });
 type FormValues = z.input<typeof formSchema>;
-const toCents = (dollars: string) => Math.round(Number(dollars) * 100);
+const toCents = (dollars: string) => parseDollarsToCents(dollars);
 const newKey = () => crypto.randomUUID();
 
 export function RefundForm({ order }: { order: OrderDetail }) {
@@ -53,9 +56,20 @@ export function RefundForm({ order }: { order: OrderDetail }) {
   };
 
   return (
-    <form onSubmit={handleSubmit((v) => { setDone(null); setPending(v); })} className="flex flex-col gap-3" noValidate>
-      <p className="text-sm text-ink-soft">Up to {formatCents(order.refundableCents)} can still be refunded.</p>
-      <TextField label="Amount to refund (dollars)" inputMode="decimal" {...register('amountDollars')} error={errors.amountDollars?.message} />
+    <form onSubmit={handleSubmit((v) => {
+      setDone(null);
+      // Checked here too, so the most that can be refunded is said at the box before anything is sent.
+      if (toCents(v.amountDollars) > order.refundableCents) {
+        setError('amountDollars', { message: `At most ${formatCents(order.refundableCents)} can still be refunded on this order.` });
+        return;
+      }
+      setPending(v);
+    })} className="flex flex-col gap-3" noValidate>
+      <TextField label="Amount to refund (dollars)" inputMode="decimal" autoComplete="off" {...register('amountDollars')} error={errors.amountDollars?.message}
+        hint={<>The most that can still be refunded is <strong>{formatCents(order.refundableCents)}</strong>.{' '}
+          <button type="button" className="font-semibold text-accent underline" onClick={() => form.setValue('amountDollars', centsAsPlainDollars(order.refundableCents), { shouldValidate: true })}>
+            Refund all of it
+          </button></>} />
       <TextAreaField label="Reason (the buyer sees it)" maxLength={REFUND_REASON_MAX} {...register('reason')} error={errors.reason?.message} />
       {soldLines.length > 0 && (
         <fieldset className="flex flex-col gap-1">

@@ -18,7 +18,7 @@ export function ReservationsPage() {
 
   return (
     <section className="flex flex-col gap-4">
-      <PageTitle>Your reservations</PageTitle>
+      <PageTitle>My holds</PageTitle>
       {holds.length === 0 ? (
         <Notice>Nothing on hold. <Link to={paths.catalogue()} className="text-accent underline">Browse the slabs</Link> and reserve the ones you want.</Notice>
       ) : (

@@ -35,12 +35,19 @@ export function ReserveButton({ slabId, slabCode, status, matchedNeighbour }: Pr
   if (done) {
     return (
       <Notice tone="success" role="status" title={done}>
-        <Link to={paths.reservations()} className="font-semibold text-accent underline">See your reservations and check out</Link>
+        <Link to={paths.reservations()} className="font-semibold text-accent underline">Go to my holds and check out</Link>
       </Notice>
     );
   }
-  if (status !== 'listed') return null;
   const conflict = error instanceof ApiError && error.status === 409;
+  const refusal = error && !(error instanceof ApiError && error.status === 401) && (
+    <Notice tone={conflict ? 'caution' : 'danger'} role="alert">
+      {friendlyMessage(error)}
+      {conflict && <> <Link to={paths.reservations()} className={buttonClass('quiet', 'min-h-0 px-0 py-0')}>My holds</Link></>}
+    </Notice>
+  );
+  // Refused because the slab changed meanwhile: the page has refreshed, so only the reason stays.
+  if (status !== 'listed') return refusal || null;
 
   return (
     <div className="flex flex-col gap-2">
@@ -52,13 +59,8 @@ export function ReserveButton({ slabId, slabCode, status, matchedNeighbour }: Pr
           </Button>
         )}
       </div>
-      <p className="text-sm text-ink-soft">A reservation holds the slab for you for a limited time; pay and choose a pickup time from your reservations.</p>
-      {error && !(error instanceof ApiError && error.status === 401) && (
-        <Notice tone={conflict ? 'caution' : 'danger'} role="alert">
-          {conflict && /another buyer/.test(error.message) ? 'Someone else is holding this slab right now.' : friendlyMessage(error)}
-          {conflict && <> <Link to={paths.reservations()} className={buttonClass('quiet', 'min-h-0 px-0 py-0')}>Your reservations</Link></>}
-        </Notice>
-      )}
+      <p className="text-sm text-ink-soft">A reservation holds the slab for you for a limited time; pay and choose a pickup time from My holds.</p>
+      {refusal}
     </div>
   );
 }

@@ -8,11 +8,12 @@ import { Tag } from '../../../components/ui/tag';
 import { friendlyMessage } from '../../../lib/api-client';
 import { meQuery, useSignOut, type Role } from '../api';
 import { ChangePasswordForm } from './change-password-form';
+import { USER_ROLE_LABELS } from '../../../../shared/office';
 
 const ROLE_WORDS: Record<Role, { label: string; text: string }> = {
-  buyer: { label: 'Customer', text: 'You can hold slabs, pay and book a pickup.' },
-  seller: { label: 'Mill staff', text: 'You can also record logs, slabs, photos and moisture readings at the yard desk.' },
-  admin: { label: 'Admin', text: 'You can also run pickups, refunds, holds and people’s roles in the office.' },
+  buyer: { label: USER_ROLE_LABELS.buyer, text: 'You can hold slabs, pay and book a pickup.' },
+  seller: { label: USER_ROLE_LABELS.seller, text: 'You can also record logs, slabs, photos and moisture readings at the yard desk.' },
+  admin: { label: USER_ROLE_LABELS.admin, text: 'You can also run pickups, refunds, holds and people’s roles in the office.' },
 };
 
 export function AccountPage() {

@@ -21,6 +21,8 @@ export function PhotoUpload({ slabId, room }: { slabId: number; room: number }) 
   function pick(list: FileList | null) {
     const chosen = list ? Array.from(list) : [];
     setDone(null);
+    // A new choice starts afresh: the last upload's refusal no longer applies.
+    upload.reset();
     setFiles(chosen);
     const tooBig = chosen.filter((f) => f.size > PHOTO_LIMITS.maxFileBytes);
     if (tooBig.length) setProblem(`${tooBig.map((f) => `${f.name} (${mb(f.size)})`).join(', ')}: each photo can be at most ${mb(PHOTO_LIMITS.maxFileBytes)}.`);

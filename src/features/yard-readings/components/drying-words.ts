@@ -1,10 +1,11 @@
-import { DRYING_STATES } from '../../../../shared/wood/index';
+import { dryingStateLabel } from '../../../../shared/slabs';
+import { formatPercent } from '../../../../shared/wood/index';
 
-export const dryingLabel = (state: string) => DRYING_STATES.find((s) => s.state === state)?.label ?? state;
+export const dryingLabel = dryingStateLabel;
 
-/** "Air-dry (19.5 %) — target 8 %": what a saved reading means for the slab. */
+/** "Air-dry (19.5 %), target 8 %": what a saved reading means for the slab. */
 export const dryingSummary = (state: string, mcPercent: number, targetMcPercent: number) =>
-  `${dryingLabel(state)} (${mcPercent} %) — target ${targetMcPercent} %`;
+  `${dryingStateLabel(state)} (${formatPercent(mcPercent)}), target ${formatPercent(targetMcPercent)}`;
 
 /** Today's date as the person at the yard sees it (not UTC), for the default reading date. */
 export function localToday(now = new Date()) {

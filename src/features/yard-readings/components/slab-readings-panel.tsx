@@ -9,6 +9,7 @@ import { slabReadingsQuery, useDeleteReading } from '../api';
 import { DryingCurve } from './drying-curve';
 import { ReadingForm } from './reading-form';
 import { dryingLabel } from './drying-words';
+import { Length } from '../../../lib/units';
 
 /** Everything about one slab's moisture for the yard desk: curve, form and the list of readings. */
 export function SlabReadingsPanel({ slabId }: { slabId: number }) {
@@ -44,7 +45,7 @@ export function SlabReadingsPanel({ slabId }: { slabId: number }) {
                   <td className="py-2 pr-3 whitespace-nowrap">{r.measuredOn}</td>
                   <td className="pr-3 font-semibold">{r.mcPercent} %</td>
                   <td className="pr-3">{METER_KIND_LABELS[r.meterKind] ?? r.meterKind}</td>
-                  <td className="pr-3">{r.location || '—'}{r.depthIn !== null ? `, ${r.depthIn} in deep` : ''}</td>
+                  <td className="pr-3">{r.location || '—'}{r.depthIn !== null && <>, <Length inches={r.depthIn} /> deep</>}</td>
                   <td className="py-1 text-right">
                     {confirmId === r.id ? (
                       <span className="inline-flex gap-1">

@@ -1,7 +1,7 @@
 import { Link } from 'react-router';
 import { createColumnHelper } from '@tanstack/react-table';
 import type { YardSlabRow } from '../../../../shared/slab-input';
-import { YARD_STATUS_LABELS } from '../../../../shared/slab-input';
+import { SLAB_STATUS_LABELS } from '../../../../shared/slabs';
 import { formatCents, formatPercent } from '../../../../shared/wood/index';
 import { BoardFeet, Length } from '../../../lib/units';
 import { Tag } from '../../../components/ui/tag';
@@ -26,7 +26,7 @@ export const inventoryColumns = [
   col.accessor('code', { header: 'Code', cell: (c) => <Link className="font-semibold text-accent underline" to={paths.yardSlab(c.row.original.id)}>{c.getValue()}</Link> }),
   col.accessor((r) => r.species.name, { id: 'species', header: 'Species' }),
   col.accessor('logCode', { id: 'log', header: 'Log', cell: (c) => <Link className="underline" to={paths.yardLog(c.row.original.logId)}>{c.getValue()}</Link> }),
-  col.accessor('status', { header: 'Status', cell: (c) => <Tag tone={c.getValue() === 'listed' ? 'moss' : c.getValue() === 'withdrawn' ? 'danger' : 'neutral'}>{YARD_STATUS_LABELS[c.getValue()]}</Tag> }),
+  col.accessor('status', { header: 'Status', cell: (c) => <Tag tone={c.getValue() === 'listed' ? 'moss' : c.getValue() === 'withdrawn' ? 'danger' : 'neutral'}>{SLAB_STATUS_LABELS[c.getValue()]}</Tag> }),
   col.accessor('thicknessIn', { header: 'Thick', cell: (c) => <Length inches={c.getValue()} /> }),
   col.accessor('widthIn', { header: 'Width', cell: (c) => <Length inches={c.getValue()} /> }),
   col.accessor('lengthIn', { header: 'Length', cell: (c) => <Length inches={c.getValue()} /> }),

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { SLAB_STATUSES } from '../../../../shared/slabs';
-import { YARD_STATUS_LABELS } from '../../../../shared/slab-input';
+import { SLAB_STATUS_LABELS } from '../../../../shared/slabs';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { logListQuery, yardSpeciesQuery, type InventoryFilters } from '../api';
 
@@ -20,7 +20,7 @@ export function InventoryFilterBar({ values, onChange }: Props) {
     <form role="search" aria-label="Filter the yard inventory" className="grid gap-2 sm:grid-cols-5" onSubmit={(e) => e.preventDefault()}>
       <SelectField label="Status" value={values.status ?? ''} onChange={(e) => set('status', e.target.value)}>
         <option value="">Any status</option>
-        {SLAB_STATUSES.map((s) => <option key={s} value={s}>{YARD_STATUS_LABELS[s]}</option>)}
+        {SLAB_STATUSES.map((s) => <option key={s} value={s}>{SLAB_STATUS_LABELS[s]}</option>)}
       </SelectField>
       <SelectField label="Species" value={values.species ?? ''} onChange={(e) => set('species', e.target.value)}>
         <option value="">Any species</option>

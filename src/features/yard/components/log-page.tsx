@@ -2,7 +2,7 @@ import { Link } from 'react-router';
 import { areBookMatched } from '../../../../shared/slabs';
 import { useQuery } from '@tanstack/react-query';
 import { SAWING_METHOD_LABELS } from '../../../../shared/slabs';
-import { YARD_STATUS_LABELS } from '../../../../shared/slab-input';
+import { SLAB_STATUS_LABELS } from '../../../../shared/slabs';
 import { formatCents } from '../../../../shared/wood/index';
 import { BoardFeet, Dimensions, Length } from '../../../lib/units';
 import type { LogSlab } from '../../../../shared/logs';
@@ -45,7 +45,7 @@ export function LogPage({ id }: { id: number }) {
                   <span><Dimensions of={s} /></span>
                   <span><BoardFeet value={s.boardFeet} /></span>
                   <span>{formatCents(s.priceCents)}</span>
-                  <Tag tone={s.status === 'listed' ? 'moss' : s.status === 'withdrawn' ? 'danger' : 'neutral'}>{YARD_STATUS_LABELS[s.status]}</Tag>
+                  <Tag tone={s.status === 'listed' ? 'moss' : s.status === 'withdrawn' ? 'danger' : 'neutral'}>{SLAB_STATUS_LABELS[s.status]}</Tag>
                 </div>
                 {log.slabs[i + 1] && areBookMatched({ logId: id, sequenceInLog: s.sequenceInLog }, { logId: id, sequenceInLog: log.slabs[i + 1].sequenceInLog }) && (
                   <p className="ml-11 border-l-2 border-accent pl-2 text-sm text-accent-strong">Book-matches the next slab (sawn side by side)</p>

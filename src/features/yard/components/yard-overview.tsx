@@ -1,7 +1,7 @@
 import { Link } from 'react-router';
 import { useQuery } from '@tanstack/react-query';
 import { SLAB_STATUSES } from '../../../../shared/slabs';
-import { YARD_STATUS_LABELS } from '../../../../shared/slab-input';
+import { SLAB_STATUS_LABELS } from '../../../../shared/slabs';
 import { buttonClass } from '../../../components/ui/button';
 import { PageTitle } from '../../../components/ui/page-title';
 import { paths } from '../../../paths';
@@ -32,7 +32,7 @@ export function YardOverview({ filters, onFiltersChange }: Props) {
                 aria-pressed={filters.status === s}
                 className={`flex min-h-11 w-full flex-col rounded-md border p-3 text-left ${filters.status === s ? 'border-accent bg-accent-soft' : 'border-line bg-surface-raised hover:bg-surface-sunk'}`}>
                 <span className="text-2xl font-bold">{data?.counts[s] ?? '–'}</span>
-                <span className="text-sm">{YARD_STATUS_LABELS[s]}</span>
+                <span className="text-sm">{SLAB_STATUS_LABELS[s]}</span>
               </button>
             </li>
           ))}
