@@ -15,6 +15,7 @@ import { writeLimit } from './lib/write-limit';
 import { catalogueRoutes } from './modules/slabs/catalogue.routes';
 import { accountRoutes } from './modules/accounts/accounts.routes';
 import { preferenceRoutes } from './modules/accounts/preferences.routes';
+import { millClockRoutes } from './modules/mill-clock/mill-clock.routes';
 import { holdRoutes } from './modules/holds/holds.routes';
 import { checkoutRoutes } from './modules/checkout/checkout.routes';
 import { pickupRoutes } from './modules/pickups/pickups.routes';
@@ -92,6 +93,7 @@ export function createApp(deps: AppDeps) {
   api.use(catalogueRoutes(deps));
   api.use(accountRoutes(deps));
   api.use(preferenceRoutes(deps));
+  api.use(millClockRoutes());
   api.use(holdRoutes(deps));
   api.use(checkoutRoutes(deps));
   api.use(pickupRoutes(deps));

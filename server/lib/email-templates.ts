@@ -1,4 +1,6 @@
 // Every e-mail Stickerline sends is built here, as HTML with a plain-text twin.
+import { formatDay } from '../../shared/dates';
+import { formatWeight } from '../../shared/wood/index';
 
 export type EmailContent = { subject: string; html: string; text: string };
 
@@ -47,7 +49,7 @@ export type OrderEmailInput = {
 
 const slabLines = (slabs: OrderEmailInput['slabs']) =>
   slabs.map((s) => `• ${s.code} — ${s.speciesName}${s.withFlattening ? ', flattened' : ''}: ${money(s.totalCents)}`).join('\n');
-const pickupLine = (p: PickupDetails) => `${p.on}, ${p.startsAt}–${p.endsAt}, at ${p.yardAddress}`;
+const pickupLine = (p: PickupDetails) => `${formatDay(p.on)}, ${p.startsAt}–${p.endsAt}, at ${p.yardAddress}`;
 
 export function orderConfirmationEmail(o: OrderEmailInput): EmailContent {
   return layout(
@@ -56,7 +58,7 @@ export function orderConfirmationEmail(o: OrderEmailInput): EmailContent {
       `Hello ${o.name},`,
       `Thank you. Your payment of ${money(o.totalCents)} went through and these slabs are now yours:\n${slabLines(o.slabs)}`,
       `Pickup: ${pickupLine(o.pickup)}.`,
-      `Total weight about ${Math.round(o.totalWeightLb)} lb. ${o.vehicle}`,
+      `Total weight about ${formatWeight(o.totalWeightLb)}. ${o.vehicle}`,
       `What to bring:\n${o.bring.map((b) => `• ${b}`).join('\n')}`,
       o.loadingHelp ? 'You asked for loading help: the yard crew will be ready for you.' : 'You did not ask for loading help; tell us before the day if you need it.',
       o.caution,
@@ -72,7 +74,7 @@ export function pickupReminderEmail(o: Pick<OrderEmailInput, 'name' | 'code' | '
       `Hello ${o.name},`,
       `A reminder that your slabs are waiting for you tomorrow: ${pickupLine(o.pickup)}.`,
       slabLines(o.slabs),
-      `Total weight about ${Math.round(o.totalWeightLb)} lb. Bring:\n${o.bring.map((b) => `• ${b}`).join('\n')}`,
+      `Total weight about ${formatWeight(o.totalWeightLb)}. Bring:\n${o.bring.map((b) => `• ${b}`).join('\n')}`,
       o.caution,
     ],
     { label: 'See your order', url: o.url },

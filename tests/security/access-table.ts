@@ -14,6 +14,7 @@ export const ACCESS: Record<string, Access> = {
   'POST /api/auth/sign-in/email': 'public',
   'POST /api/webhooks/payments': 'signature',
   'GET /api/health': 'public',
+  'GET /api/mill-clock': 'public',
   'GET /api/slabs': 'public',
   'GET /api/slabs/:id': 'public',
   'GET /api/species': 'public',

@@ -126,7 +126,7 @@ export async function reschedulePickup(deps: RefundDeps, actor: SessionUser, ord
     }
     const window = await claimPickupPlace(tx, { windowId: input.pickupWindowId, day: input.pickupOn, now });
     const oldWindow = await repo.findWindow(tx, order.pickupWindowId);
-    const previous = order.pickupOn ? `${order.pickupOn}${oldWindow ? `, ${formatWindow(oldWindow)}` : ''}` : null;
+    const previous = order.pickupOn ? `${formatDay(order.pickupOn)}${oldWindow ? `, ${formatWindow(oldWindow)}` : ''}` : null;
     await repo.updateOrder(tx, orderId, { pickupWindowId: window.id, pickupOn: input.pickupOn, status: 'paid', reminderSentAt: null });
     await recordAudit(tx, {
       actor, action: 'order.reschedule', entityType: 'order', entityId: orderId,

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { formatDay } from '../../../shared/dates';
 import { eq } from 'drizzle-orm';
 import { createTestApp, waitForMail, type TestApp } from '../../helpers/test-app';
 import { logRow, slabRow } from '../../helpers/fixtures';
@@ -52,7 +53,7 @@ describe('checkout', () => {
     const mail = await waitForMail(buyer.email, (m) => m.subject.includes(order.code));
     expect(mail.text).toContain(a.code);
     expect(mail.text).toContain(`$${(order.totalCents / 100).toFixed(2)}`);
-    expect(mail.text).toContain(`${slot.day}, 09:00–12:00`);
+    expect(mail.text).toContain(`${formatDay(slot.day)}, 09:00–12:00`);
     expect(mail.text).toContain(YARD_ADDRESS);
     expect(mail.text).toContain('ratchet straps');
     expect(mail.html).toContain(a.code);

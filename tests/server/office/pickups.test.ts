@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { formatDay } from '../../../shared/dates';
 import { and, eq } from 'drizzle-orm';
 import { createTestApp, TEST_ORIGIN, waitForMail, type TestApp } from '../../helpers/test-app';
 import { logRow, slabRow } from '../../helpers/fixtures';
@@ -130,7 +131,7 @@ describe('POST /api/office/orders/:id/reschedule', () => {
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ pickupOn: target, pickupWindow: { id: window.id } });
     const mail = await waitForMail(buyer.email, (m) => m.subject === `New pickup time for order ${order.code}`);
-    expect(mail.text).toContain(`${target}, 13:00–16:00`);
+    expect(mail.text).toContain(`${formatDay(target)}, 13:00–16:00`);
     expect((await t.db.select().from(auditLog).where(eq(auditLog.action, 'order.reschedule'))).length).toBeGreaterThan(0);
   });
 

@@ -5,6 +5,7 @@ import { SelectField, TextField } from '../../../components/ui/field';
 import { Button } from '../../../components/ui/button';
 import { paths } from '../../../paths';
 import { auditQuery, type AuditFilters } from '../api';
+import { MillDateTime } from '../../../lib/dates';
 
 /** Filters live in the URL, so a filtered view can be bookmarked or sent to a colleague. */
 export function auditFiltersFrom(params: URLSearchParams): AuditFilters {
@@ -44,7 +45,7 @@ export function AuditPage() {
       <ol className="flex flex-col gap-2">
         {data?.items.map((e) => (
           <li key={e.id} className="rounded-md border border-line bg-surface-raised p-3 text-sm">
-            <p><span className="font-semibold">{e.action}</span> on {e.entityType} {e.entityId} · {e.actorEmail ?? 'the system'} · {new Date(e.createdAt).toLocaleString()}</p>
+            <p><span className="font-semibold">{e.action}</span> on {e.entityType} {e.entityId} · {e.actorEmail ?? 'the system'} · <MillDateTime at={e.createdAt} /></p>
             <details className="mt-1">
               <summary className="cursor-pointer text-accent">Before and after</summary>
               <div className="mt-1 grid gap-2 sm:grid-cols-2">

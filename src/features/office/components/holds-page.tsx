@@ -9,6 +9,7 @@ import { paths } from '../../../paths';
 import type { ActiveHold } from '../../../../shared/office';
 import { holdsQuery, useReleaseHold } from '../api';
 import { ConfirmDialog } from './confirm-dialog';
+import { MillDateTime } from '../../../lib/dates';
 
 const left = (iso: string) => {
   const h = (Date.parse(iso) - Date.now()) / 3_600_000;
@@ -28,7 +29,7 @@ export function HoldsPage() {
           <li key={h.id} className="flex flex-wrap items-center justify-between gap-2 rounded-md border border-line bg-surface-raised p-3">
             <span>
               <Link to={paths.slab(h.slabId)} className="font-semibold text-accent underline">{h.slabCode}</Link>{' '}
-              for {h.buyerName} ({h.buyerEmail}) · until {new Date(h.expiresAt).toLocaleString()} · {left(h.expiresAt)}
+              for {h.buyerName} ({h.buyerEmail}) · until <MillDateTime at={h.expiresAt} /> · {left(h.expiresAt)}
             </span>
             <Button variant="secondary" onClick={() => setTarget(h)}>Let go</Button>
           </li>

@@ -11,8 +11,8 @@ import { orderQuery } from '../api';
 import { ORDER_STATUS_LABELS } from '../../../../shared/office';
 import { SLAB_STATUSES, SLAB_STATUS_LABELS, type SlabStatus } from '../../../../shared/slabs';
 import { RefundForm } from './refund-form';
+import { MillDateTime } from '../../../lib/dates';
 
-const when = (iso: string) => new Date(iso).toLocaleString();
 const slabStateWords = (s: string) => ((SLAB_STATUSES as readonly string[]).includes(s) ? SLAB_STATUS_LABELS[s as SlabStatus] : s);
 
 export function OrderPage() {
@@ -32,7 +32,7 @@ export function OrderPage() {
       <dl className="grid gap-x-6 gap-y-1 sm:grid-cols-[12rem_1fr]">
         <dt className="font-semibold">Buyer</dt><dd>{order.buyerName} · <a className="underline" href={`mailto:${order.buyerEmail}`}>{order.buyerEmail}</a></dd>
         <dt className="font-semibold">Pickup</dt><dd>{order.pickupOn ?? 'not booked'}{order.pickupWindow ? `, ${formatWindow(order.pickupWindow)}` : ''}</dd>
-        <dt className="font-semibold">Collected</dt><dd>{order.pickedUpAt ? when(order.pickedUpAt) : 'not yet'}</dd>
+        <dt className="font-semibold">Collected</dt><dd>{order.pickedUpAt ? <MillDateTime at={order.pickedUpAt} /> : 'not yet'}</dd>
         <dt className="font-semibold">Load</dt><dd>about <Weight pounds={order.totalWeightLb} />, longest slab <Length inches={order.longestSlabIn} /></dd>
         <dt className="font-semibold">Total</dt><dd>{formatCents(order.totalCents)} (slabs {formatCents(order.slabsCents)}, services {formatCents(order.servicesCents)})</dd>
         <dt className="font-semibold">Refunded</dt><dd>{formatCents(order.refundedCents)}</dd>
@@ -60,7 +60,7 @@ export function OrderPage() {
             <tbody>
               {order.payments.map((p) => (
                 <tr key={p.id} className="border-b border-line/60">
-                  <td className="py-1">{when(p.createdAt)}</td>
+                  <td className="py-1"><MillDateTime at={p.createdAt} /></td>
                   <td>{p.kind === 'refund' ? 'Refund' : 'Payment'}</td>
                   <td>{p.kind === 'refund' ? '−' : ''}{formatCents(p.amountCents)}</td>
                   <td>{p.status}</td>

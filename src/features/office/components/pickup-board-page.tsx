@@ -12,6 +12,7 @@ import type { PickupOrder, PickupBoard } from '../../../../shared/office';
 import { pickupsQuery } from '../api';
 import { PickupActions } from './pickup-actions';
 import { ORDER_STATUS_LABELS } from '../../../../shared/office';
+import { MillDateTime } from '../../../lib/dates';
 
 const shift = (day: string, n: number) => new Date(Date.parse(`${day}T00:00:00Z`) + n * 86_400_000).toISOString().slice(0, 10);
 
@@ -75,7 +76,7 @@ function OrderCard({ order, board }: { order: PickupOrder; board: PickupBoard })
       </div>
       <p>{order.buyerName} · <a className="underline" href={`mailto:${order.buyerEmail}`}>{order.buyerEmail}</a></p>
       <p className="text-sm">Slabs: {order.slabCodes.join(', ') || '—'} · about <Weight pounds={order.totalWeightLb} /> · longest <Length inches={order.longestSlabIn} /></p>
-      {order.pickedUpAt && <p className="text-sm text-ink-soft">Handed over {new Date(order.pickedUpAt).toLocaleString()}</p>}
+      {order.pickedUpAt && <p className="text-sm text-ink-soft">Handed over <MillDateTime at={order.pickedUpAt} /></p>}
       <PickupActions order={order} windows={board.windows} noShowRule={board.noShowRule} />
     </li>
   );

@@ -1,4 +1,5 @@
 import { useEffect, useState } from 'react';
+import { MillDateTime } from '../../../lib/dates';
 
 const pad = (n: number) => String(n).padStart(2, '0');
 
@@ -17,7 +18,7 @@ export function TimeLeft({ until }: { until: string }) {
   return (
     <span className={ms < 3_600_000 ? 'font-semibold text-caution' : 'text-ink'}>
       <span aria-hidden="true">{text} left</span>
-      <span className="sr-only">Held until {new Date(until).toLocaleString()}</span>
+      <span className="sr-only">Held until <MillDateTime at={until} /> (mill time)</span>
     </span>
   );
 }
