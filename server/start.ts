@@ -33,6 +33,10 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
   fs.mkdirSync(env.DATA_DIR, { recursive: true });
   fs.mkdirSync(env.UPLOADS_DIR, { recursive: true });
 
+  // The database first: a folder another process already holds is refused before anything else starts.
+  const database = await openDatabase({ databaseUrl: env.DATABASE_URL, dataDir: path.join(env.DATA_DIR, 'pglite'), purpose: 'the shop' });
+  await migrateDatabase(database);
+
   const wantFakes = env.START_LOCAL_FAKES ? env.START_LOCAL_FAKES === 'true' : !production && !env.SMTP_PORT;
   const fakes = wantFakes ? await startLocalFakes({}) : null;
   const smtpPort = env.SMTP_PORT ?? fakes?.smtpPort ?? 25;
@@ -42,8 +46,6 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
     protocol: env.STRIPE_PROTOCOL ?? (fakes ? ('http' as const) : undefined),
   };
 
-  const database = await openDatabase({ databaseUrl: env.DATABASE_URL, dataDir: path.join(env.DATA_DIR, 'pglite') });
-  await migrateDatabase(database);
 
   const publicPort = env.PORT;
   const apiPort = dev ? publicPort + 1 : publicPort;

@@ -1,6 +1,9 @@
 // Tables used by the auth library (better-auth core + admin plugin). Column names follow what
 // its CLI generates (compare with `npm run auth:check`); keep them in step when upgrading the library.
-import { boolean, index, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
+import { boolean, check, index, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { USER_ROLES } from '../../../shared/office';
+import { oneOf } from './checks';
 
 export const user = pgTable('user', {
   id: text('id').primaryKey(),
@@ -14,7 +17,7 @@ export const user = pgTable('user', {
   banned: boolean('banned').default(false),
   banReason: text('ban_reason'),
   banExpires: timestamp('ban_expires'),
-});
+}, (t) => [check('user_role_known', sql`${t.role} is null or ${oneOf(t.role, USER_ROLES)}`)]);
 
 export const session = pgTable('session', {
   id: text('id').primaryKey(),

@@ -1,4 +1,5 @@
-import { boolean, index, integer, pgTable, serial, text, timestamp } from 'drizzle-orm/pg-core';
+import { boolean, check, index, integer, pgTable, serial, text, timestamp } from 'drizzle-orm/pg-core';
+import { within } from './checks';
 import { slabs } from './slabs';
 
 export const slabPhotos = pgTable('slab_photos', {
@@ -13,4 +14,9 @@ export const slabPhotos = pgTable('slab_photos', {
   isIllustration: boolean('is_illustration').notNull().default(false),
   altText: text('alt_text').notNull().default(''),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-}, (t) => [index('slab_photos_slab_idx').on(t.slabId)]);
+}, (t) => [
+  index('slab_photos_slab_idx').on(t.slabId),
+  check('slab_photos_width_in_range', within(t.width, 0, 100_000)),
+  check('slab_photos_height_in_range', within(t.height, 0, 100_000)),
+  check('slab_photos_position_in_range', within(t.position, 0, 10_000, { minInclusive: true })),
+]);

@@ -14,6 +14,7 @@ import { loadPricingRules } from '../pricing/pricing.service';
 import { isUniqueViolation } from './unique-violation';
 import { quoteSlab } from '../pricing/slab-quote';
 import * as repo from './holds.repo';
+import { moveSlab, moveSlabs } from '../slabs/slab-state';
 
 export type HoldOptions = { holdHours?: number; now?: Date };
 
@@ -55,7 +56,7 @@ async function holdSlabs(db: Db, buyer: SessionUser, slabIds: number[], opts: Ho
       const groupId = slabIds.length > 1 ? randomUUID() : null;
       const created = [];
       for (const slabId of slabIds) {
-        if (!(await repo.markSlabHeld(tx, slabId))) throw await refusal(tx, slabId, buyer.id);
+        if (!(await moveSlab(tx, slabId, 'held', 'hold', now))) throw await refusal(tx, slabId, buyer.id);
         created.push(await repo.insertHold(tx, { slabId, buyerId: buyer.id, groupId, expiresAt, createdAt: now }));
       }
       return created;
@@ -110,7 +111,7 @@ export async function releaseHold(db: Db, actor: SessionUser, holdId: number) {
     if (hold.status !== 'active') throw new AppError(409, 'hold_closed', 'That hold has already ended.');
     const [closed] = await repo.closeHolds(tx, [hold.id], 'released', actor.id);
     if (!closed) throw new AppError(409, 'hold_closed', 'That hold has already ended.');
-    await repo.markSlabsListed(tx, [hold.slabId]);
+    await moveSlabs(tx, [hold.slabId], 'listed', 'hold-ended');
     if (hold.buyerId !== actor.id) {
       await recordAudit(tx, { actor, action: 'hold.release', entityType: 'hold', entityId: hold.id, before: { status: 'active' }, after: { status: 'released' } });
     }
@@ -126,7 +127,7 @@ export async function releaseExpiredHolds(db: Db, { now = new Date(), publicUrl 
     const closed = await repo.closeHolds(tx, expired.map((e) => e.hold.id), 'expired', 'system', now);
     const closedIds = new Set(closed.map((h) => h.id));
     const done = expired.filter((e) => closedIds.has(e.hold.id));
-    await repo.markSlabsListed(tx, done.map((e) => e.hold.slabId));
+    await moveSlabs(tx, done.map((e) => e.hold.slabId), 'listed', 'hold-ended', now);
     const byBuyer = new Map<string, typeof done>();
     for (const e of done) byBuyer.set(e.buyerEmail, [...(byBuyer.get(e.buyerEmail) ?? []), e]);
     for (const [email, items] of byBuyer) {

@@ -4,6 +4,7 @@ import { recordAudit } from '../../lib/audit';
 import type { SessionUser } from '../../lib/session';
 import type { ActiveHold } from '../../../shared/office';
 import * as repo from './holds.repo';
+import { moveSlab } from '../slabs/slab-state';
 
 export async function listActiveHolds(db: Db): Promise<ActiveHold[]> {
   const rows = await repo.findActiveHolds(db);
@@ -17,7 +18,8 @@ export async function releaseHold(db: Db, actor: SessionUser, id: number) {
     if (!hold) throw notFound('That hold');
     if (hold.status !== 'active') throw new AppError(409, 'hold_not_active', `That hold is already ${hold.status}; nothing to release.`);
     await repo.closeHold(tx, id, actor.id);
-    const relisted = await repo.relistHeldSlab(tx, hold.slabId);
+    // Only a slab still held goes back on sale; a sold slab stays sold.
+    const relisted = Boolean(await moveSlab(tx, hold.slabId, 'listed', 'hold-ended'));
     await recordAudit(tx, {
       actor, action: 'hold.release', entityType: 'hold', entityId: id,
       before: { status: 'active', slabId: hold.slabId, buyerId: hold.buyerId }, after: { status: 'released', slabRelisted: relisted },

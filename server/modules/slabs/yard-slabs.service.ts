@@ -11,6 +11,7 @@ import { isUniqueViolation } from '../logs/logs.repo';
 import { derivedSlabColumns } from './slab-derived';
 import { assertPublishable, assertStaffMove } from './yard-slabs.workflow';
 import * as repo from './yard-slabs.repo';
+import { moveEverySlab, startingStatus } from './slab-state';
 
 type Row = NonNullable<Awaited<ReturnType<typeof repo.findYardRow>>>;
 
@@ -84,7 +85,7 @@ export async function createSlab(db: Db, raw: unknown, actor: SessionUser): Prom
       figureNotes: input.figureNotes ?? '', defects: input.defects ?? [], yardStack: input.yardStack ?? '',
       yardPosition: input.yardPosition ?? '', description: input.description ?? '',
       priceOverrideCents: overrideCents, priceOverrideReason: overrideReason,
-      status: input.status ?? 'drying', dryingState: await dryingStateOf(tx, null),
+      status: startingStatus(input.status), dryingState: await dryingStateOf(tx, null),
     });
     await recordAudit(tx, { actor, action: 'slab.create', entityType: 'slab', entityId: row.id, before: null, after: { status: row.status, ...money(row) } });
     return row.id;
@@ -124,10 +125,10 @@ export async function updateSlab(db: Db, id: number, raw: unknown, actor: Sessio
     const { status: _s, priceOverrideCents: _c, priceOverrideReason: _r, ...rest } = input;
     const after = await repo.updateSlab(tx, id, {
       ...rest, ...measures, ...derived, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason,
-      status: to, dryingState: await dryingStateOf(tx, id),
-      ...(to === 'listed' && from !== 'listed' ? { listedAt: new Date() } : {}),
+      dryingState: await dryingStateOf(tx, id),
     });
     if (from !== to) {
+      await moveEverySlab(tx, [id], to, 'yard');
       await recordAudit(tx, { actor, action: 'slab.status', entityType: 'slab', entityId: id, before: { status: from }, after: { status: to } });
     }
     if (after.priceCents !== slab.priceCents || after.priceOverrideCents !== slab.priceOverrideCents || after.priceOverrideReason !== slab.priceOverrideReason) {
