@@ -17,7 +17,13 @@ export const user = pgTable('user', {
   banned: boolean('banned').default(false),
   banReason: text('ban_reason'),
   banExpires: timestamp('ban_expires'),
-}, (t) => [check('user_role_known', sql`${t.role} is null or ${oneOf(t.role, USER_ROLES)}`)]);
+  // Stickerline's own column (not the auth library's): how this person wants sizes and weights
+  // shown. Null until they choose; the browser's own choice applies meanwhile.
+  units: text('units'),
+}, (t) => [
+  check('user_units_known', sql`${t.units} is null or ${t.units} in ('imperial', 'metric')`),
+  check('user_role_known', sql`${t.role} is null or ${oneOf(t.role, USER_ROLES)}`),
+]);
 
 export const session = pgTable('session', {
   id: text('id').primaryKey(),

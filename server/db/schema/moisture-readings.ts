@@ -16,6 +16,11 @@ export const moistureReadings = pgTable('moisture_readings', {
   ambientTempF: doublePrecision('ambient_temp_f'),
   ambientRhPercent: doublePrecision('ambient_rh_percent'),
   recordedBy: text('recorded_by').references(() => user.id, { onDelete: 'set null' }),
+  /**
+   * in-line: followed plausibly from the slab's previous reading; confirmed: jumped, and the person who
+   * took it confirmed it; unconfirmed: nobody stands behind it (kept for the yard, never shown to buyers).
+   */
+  review: text('review').notNull().default('in-line'),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
 }, (t) => [
   index('moisture_slab_idx').on(t.slabId, t.measuredOn),
@@ -26,4 +31,5 @@ export const moistureReadings = pgTable('moisture_readings', {
   check('moisture_depth_in_range', sql`${t.depthIn} is null or (${within(t.depthIn, 0, 12)})`),
   check('moisture_ambient_rh_in_range', sql`${t.ambientRhPercent} is null or (${within(t.ambientRhPercent, 0, 100, { minInclusive: true })})`),
   check('moisture_ambient_temp_in_range', sql`${t.ambientTempF} is null or (${within(t.ambientTempF, -60, 140, { minInclusive: true })})`),
+  check('moisture_readings_review_values', sql`${t.review} in ('in-line', 'confirmed', 'unconfirmed')`),
 ]);

@@ -4,7 +4,7 @@ import { recordAudit } from '../../lib/audit';
 import type { SessionUser } from '../../lib/session';
 import { dryingStateFor, roundBoardFeet } from '../../../shared/wood/index';
 import { createSlabSchema, updateSlabSchema, type YardSlabDetail, type YardSlabRow } from '../../../shared/slab-input';
-import type { SlabStatus } from '../../../shared/slabs';
+import { isSold, type SlabStatus } from '../../../shared/slabs';
 import { loadPricingRules } from '../pricing/pricing.service';
 import { readMillSettings } from '../pricing/pricing.repo';
 import { isUniqueViolation } from '../logs/logs.repo';
@@ -12,6 +12,13 @@ import { derivedSlabColumns } from './slab-derived';
 import { assertPublishable, assertStaffMove } from './yard-slabs.workflow';
 import * as repo from './yard-slabs.repo';
 import { moveEverySlab, startingStatus } from './slab-state';
+import { slabFitsLog } from '../../../shared/logs';
+
+/** A slab cannot be wider than its log's butt (plus flare) or longer than the log: refused at the field. */
+function assertFitsLog(slab: { widthsIn?: number[]; lengthIn?: number }, log: Parameters<typeof slabFitsLog>[1]) {
+  const problems = slabFitsLog(slab, log);
+  if (Object.keys(problems).length) throw validationError(problems);
+}
 
 type Row = NonNullable<Awaited<ReturnType<typeof repo.findYardRow>>>;
 
@@ -78,6 +85,7 @@ export async function createSlab(db: Db, raw: unknown, actor: SessionUser): Prom
     const overrideCents = input.priceOverrideCents ?? null;
     const overrideReason = overrideCents === null ? null : input.priceOverrideReason?.trim() ?? null;
     const measures = { thicknessIn: input.thicknessIn, widthsIn: input.widthsIn, lengthIn: input.lengthIn, figures: input.figures ?? [] };
+    assertFitsLog(measures, found.log);
     const derived = derivedSlabColumns({ ...measures, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason }, found.rate, await loadPricingRules(tx));
     const row = await repo.insertSlab(tx, {
       ...measures, ...derived, code: await freeSlabCode(tx, found.log.code, seq), logId: found.log.id,
@@ -121,7 +129,13 @@ export async function updateSlab(db: Db, id: number, raw: unknown, actor: Sessio
       thicknessIn: input.thicknessIn ?? slab.thicknessIn, widthsIn: input.widthsIn ?? slab.widthsIn,
       lengthIn: input.lengthIn ?? slab.lengthIn, figures: input.figures ?? slab.figures,
     };
-    const derived = derivedSlabColumns({ ...measures, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason }, await repo.speciesRate(tx, slab.speciesId), await loadPricingRules(tx));
+    if (input.widthsIn !== undefined || input.lengthIn !== undefined) {
+      const found = await repo.findLogWithRate(tx, slab.logId);
+      if (found) assertFitsLog({ widthsIn: input.widthsIn, lengthIn: input.lengthIn }, found.log);
+    }
+    const worked = derivedSlabColumns({ ...measures, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason }, await repo.speciesRate(tx, slab.speciesId), await loadPricingRules(tx));
+    // A sold slab keeps the price it sold at, whatever is corrected on its record afterwards.
+    const derived = isSold(from) ? { ...worked, priceCents: slab.priceCents } : worked;
     const { status: _s, priceOverrideCents: _c, priceOverrideReason: _r, ...rest } = input;
     const after = await repo.updateSlab(tx, id, {
       ...rest, ...measures, ...derived, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason,

@@ -1,3 +1,0 @@
--- Backfill before the CHECK constraints of the next migration: a 0 % (or negative) "reading" was an
--- empty field saved as a number, not a measurement. It is removed so the constraint can hold.
-DELETE FROM "moisture_readings" WHERE "mc_percent" <= 0;
