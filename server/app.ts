@@ -27,6 +27,7 @@ import { officeRoutes } from './modules/office/office.routes';
 import { millRulesRoutes } from './modules/mill-rules/mill-rules.routes';
 import { readingRoutes } from './modules/readings/readings.routes';
 import { shopAddressRoutes } from './modules/shop-address/shop-address.routes';
+import { matchedSetRoutes } from './modules/matched-sets/matched-sets.routes';
 
 export type AppDeps = {
   db: Db;
@@ -99,6 +100,7 @@ export function createApp(deps: AppDeps) {
   api.use(logRoutes(deps));
   api.use(yardSlabRoutes(deps));
   api.use(readingRoutes(deps));
+  api.use(matchedSetRoutes(deps));
   api.use(officeRoutes(deps));
   api.use(millRulesRoutes(deps));
   api.use(shopAddressRoutes({ publicUrl: deps.publicUrl ?? deps.trustedOrigins?.[0] ?? 'http://localhost:3000' }));
