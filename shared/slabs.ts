@@ -1,3 +1,4 @@
+import type { DryingForecast, LiftingAdvice } from './wood/index';
 import { z } from 'zod';
 
 export const SLAB_STATUSES = ['drying', 'ready', 'listed', 'held', 'sold', 'picked-up', 'withdrawn'] as const;
@@ -132,10 +133,15 @@ export type SlabDetail = Omit<SlabListItem, 'species'> & {
   moistureReadings: MoistureReadingView[];
   neighbours: LogNeighbour[];
   priceBreakdown: PriceBreakdownView;
-  /** Estimated weight at the latest reading (or at the mill's air-dry assumption when none). */
+  /** Estimated weight at the latest reading, or at the species' typical green MC when there is none. */
   weightLb: number;
   weightAtMcPercent: number;
-  lifting: { peopleNeeded: number; needsEquipment: boolean; message: string };
+  /** Whether the weight uses a reading or the typical green MC, and a sentence saying so. */
+  weightBasis: 'reading' | 'typical-green';
+  weightNote: string;
+  lifting: LiftingAdvice;
+  /** When the slab should reach the air-dry line, from its own readings (or the rule of thumb). */
+  dryingForecast: DryingForecast;
   airDryReadyOn: string | null;
   targetMcPercent: number;
   flatteningPriceCents: number;

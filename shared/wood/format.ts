@@ -1,4 +1,5 @@
-import { requireFinite, WoodMathError } from './errors';
+import { requireFinite, requireInRange, WoodMathError } from './errors';
+import { WOOD_LIMITS } from './limits';
 import { roundHalfAwayFromZero } from './rounding';
 
 function gcd(a: number, b: number): number {
@@ -7,7 +8,7 @@ function gcd(a: number, b: number): number {
 
 /** Inches to the nearest 1/16, reduced: 1.75 → "1 3/4", 0.1875 → "3/16", 2 → "2". */
 export function toSixteenths(inches: number): string {
-  requireFinite(inches, 'inches');
+  requireInRange(inches, 'inches', -WOOD_LIMITS.anyInches, WOOD_LIMITS.anyInches);
   const sixteenths = roundHalfAwayFromZero(Math.abs(inches) * 16, 0);
   if (sixteenths === 0) return '0';
   const sign = inches < 0 ? '-' : '';
@@ -21,7 +22,7 @@ export function toSixteenths(inches: number): string {
 
 /** "1 3/4 in (1.75)": the shop's fraction with the exact decimal (up to 3 places) beside it. */
 export function formatInches(inches: number): string {
-  requireFinite(inches, 'inches');
+  requireInRange(inches, 'inches', -WOOD_LIMITS.anyInches, WOOD_LIMITS.anyInches);
   return `${toSixteenths(inches)} in (${roundHalfAwayFromZero(inches, 3)})`;
 }
 
@@ -37,6 +38,9 @@ export function parseInches(text: string): number {
     if (Number(den) === 0) throw new WoodMathError(`"${text}" divides by zero`, 'inches');
     value = Number(whole ?? 0) + Number(num) / Number(den);
   }
+  if (!Number.isFinite(value) || Math.abs(value) > WOOD_LIMITS.anyInches) {
+    throw new WoodMathError(`"${text}" is more than ${WOOD_LIMITS.anyInches} in`, 'inches');
+  }
   return minus ? -value : value;
 }
 
@@ -44,6 +48,7 @@ export function parseInches(text: string): number {
 export function formatCents(cents: number): string {
   requireFinite(cents, 'cents');
   if (!Number.isInteger(cents)) throw new WoodMathError(`cents must be a whole number (got ${cents})`, 'cents');
+  if (!Number.isSafeInteger(cents)) throw new WoodMathError(`cents is too large to show exactly (got ${cents})`, 'cents');
   const abs = Math.abs(cents);
   const dollarsPart = Math.floor(abs / 100).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ',');
   const centsPart = String(abs % 100).padStart(2, '0');

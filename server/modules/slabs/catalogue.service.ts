@@ -7,6 +7,7 @@ import { quoteSlab } from '../pricing/slab-quote';
 import { loadPricingRules } from '../pricing/pricing.service';
 import { readMillSettings } from '../pricing/pricing.repo';
 import * as repo from './catalogue.repo';
+import { forecastAirDry } from './drying-forecast';
 
 const thumb = (key: string | null) => (key ? photoUrls(key).thumbUrl : null);
 const display = (key: string | null) => (key ? photoUrls(key).displayUrl : null);
@@ -68,7 +69,10 @@ export async function getSlabDetail(db: Tx, id: number, { includeHidden = false 
     priceBreakdown: quote.breakdown,
     weightLb: Math.round(quote.weightLb),
     weightAtMcPercent: quote.mcPercent,
+    weightBasis: quote.weighing.basis,
+    weightNote: quote.weighing.note,
     lifting: lifting({ weightLb: quote.weightLb }),
+    dryingForecast: forecastAirDry({ readings, thicknessIn: slab.thicknessIn, milledOn: log.milledOn }),
     airDryReadyOn: log.milledOn ? airDryReadyDate({ milledOn: log.milledOn, thicknessIn: slab.thicknessIn }).toISOString().slice(0, 10) : null,
     targetMcPercent: settings?.targetMcPercent ?? 8,
     flatteningPriceCents: quote.flattening.priceCents,

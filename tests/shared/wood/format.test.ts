@@ -47,3 +47,12 @@ describe('formatCents', () => {
     expect(() => formatCents(10.5)).toThrow(WoodMathError);
   });
 });
+
+describe('format limits', () => {
+  it('refuses figures too large to show honestly', () => {
+    expect(() => toSixteenths(1e300)).toThrow(WoodMathError);
+    expect(() => formatInches(1e7)).toThrow(/inches/);
+    expect(() => parseInches('9'.repeat(400))).toThrow(WoodMathError);
+    expect(() => formatCents(2 ** 60)).toThrow(/cents/);
+  });
+});
