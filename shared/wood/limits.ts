@@ -30,8 +30,8 @@ export const WOOD_LIMITS = {
   nominalQuarters: 192,
   /** A rate per board foot or per square foot: $100,000. */
   rateCents: 10_000_000,
-  /** A price, override or minimum charge: $10 million. Far below Number.MAX_SAFE_INTEGER. */
-  priceCents: 1_000_000_000,
+  /** A price, override, minimum charge or typed dollar amount: $100 million. Far below Number.MAX_SAFE_INTEGER (about 9e15). */
+  priceCents: 10_000_000_000,
   /** Price multipliers (figure, thick stock). */
   maxMultiplier: 10,
   /** Dates handled by the drying math. */

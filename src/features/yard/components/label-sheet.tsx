@@ -1,19 +1,21 @@
 import { useEffect, useState } from 'react';
-import { useQueries } from '@tanstack/react-query';
+import { useQueries, useQuery } from '@tanstack/react-query';
 import QRCode from 'qrcode';
 import type { YardSlabDetail } from '../../../../shared/slab-input';
-import { roundBoardFeet, toSixteenths } from '../../../../shared/wood/index';
+import { BoardFeet, Dimensions } from '../../../lib/units';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { PageTitle } from '../../../components/ui/page-title';
 import { paths } from '../../../paths';
-import { yardSlabQuery } from '../api';
+import { shopAddressQuery, yardSlabQuery } from '../api';
 
 const MAX_LABELS = 60;
 
 function SlabLabel({ slab }: { slab: YardSlabDetail }) {
   const [qr, setQr] = useState<string | null>(null);
-  const url = `${window.location.origin}${paths.slab(slab.id)}`;
+  // The shop's public address, so a label printed at a desk opened on localhost still works on a phone.
+  const base = useQuery(shopAddressQuery()).data?.url ?? window.location.origin;
+  const url = `${base}${paths.slab(slab.id)}`;
   useEffect(() => {
     let live = true;
     QRCode.toDataURL(url, { margin: 1, width: 240, errorCorrectionLevel: 'M' }).then((d) => live && setQr(d), () => live && setQr(null));
@@ -25,8 +27,8 @@ function SlabLabel({ slab }: { slab: YardSlabDetail }) {
       <div className="grid content-start gap-0.5">
         <p className="font-display text-2xl font-bold">{slab.code}</p>
         <p className="font-semibold">{slab.species.name}</p>
-        <p>{toSixteenths(slab.thicknessIn)}″ × {toSixteenths(slab.widthIn)}″ × {toSixteenths(slab.lengthIn)}″</p>
-        <p>{roundBoardFeet(slab.boardFeet)} board feet</p>
+        <p><Dimensions of={slab} /></p>
+        <p><BoardFeet value={slab.boardFeet} /></p>
         <p className="text-sm">Kept at: {[slab.yardStack, slab.yardPosition].filter(Boolean).join(' · ') || 'not recorded'}</p>
       </div>
     </article>
