@@ -1,6 +1,7 @@
 import { NavLink, Outlet, useNavigation } from 'react-router';
 import { useQuery } from '@tanstack/react-query';
 import { meQuery, type Role } from '../features/session/api';
+import { useCompareList } from '../features/buyer-lists/api';
 import { paths } from '../paths';
 
 type NavItem = { to: string; label: string; roles?: Role[]; visitorOnly?: boolean; signedIn?: boolean };
@@ -8,6 +9,7 @@ type NavItem = { to: string; label: string; roles?: Role[]; visitorOnly?: boolea
 // One list decides who sees which link; the server still checks every call.
 const NAV: NavItem[] = [
   { to: paths.catalogue(), label: 'Slabs' },
+  { to: paths.saved(), label: 'Saved', signedIn: true },
   { to: paths.reservations(), label: 'My holds', signedIn: true },
   { to: paths.orders(), label: 'Orders', signedIn: true },
   { to: paths.yard(), label: 'Yard desk', roles: ['seller', 'admin'] },
@@ -22,9 +24,12 @@ const linkClass = ({ isActive }: { isActive: boolean }) =>
 export function RootLayout() {
   const { data: me } = useQuery(meQuery());
   const navigation = useNavigation();
-  const items = NAV.filter((i) =>
+  const compare = useCompareList();
+  const shown = NAV.filter((i) =>
     i.visitorOnly ? !me : i.signedIn ? !!me : i.roles ? !!me && i.roles.includes(me.role) : true,
   );
+  // The compare link appears once something is on the list, right after "Slabs".
+  const items = compare.ids.length ? [shown[0], { to: paths.compare(), label: `Compare (${compare.ids.length})` }, ...shown.slice(1)] : shown;
   return (
     <div className="flex min-h-screen flex-col">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-surface-raised focus:p-2">Skip to content</a>
