@@ -37,5 +37,9 @@ export {
   lifting, NIOSH_LOAD_CONSTANT_LB, EQUIPMENT_ABOVE_LB, type LiftingInput, type LiftingAdvice,
 } from './lifting';
 export { SPECIES, getSpecies, type Species, type SpeciesShrinkage } from './species';
-export { toSixteenths, formatInches, formatCents, parseInches } from './format';
+export {
+  toSixteenths, formatInches, formatLength, formatLongLength, formatDimensions, formatWeight, formatBoardFeet, formatArea,
+  formatPercent, formatDays, plainNumber, parseInches, inchesForInput, formatCents, centsAsPlainDollars, parseDollarsToCents,
+  UNIT_SYSTEMS, UNIT_SYSTEM_LABELS, isUnitSystem, MM_PER_INCH, KG_PER_POUND, type UnitSystem, type ParseInchesOptions,
+} from './format';
 export { cutPlan, CHAINSAW_KERF_IN, DEFAULT_FLATTEN_ALLOWANCE_IN, type CutPlan, type CutPlanInput, type PlannedSlab } from './cut-plan';

@@ -22,6 +22,8 @@ export const ACCESS: Record<string, Access> = {
   'GET /api/species': 'public',
   'GET /api/figure-kinds': 'public',
   'GET /api/me': 'signed-in',
+  'GET /api/me/preferences': 'signed-in',
+  'PUT /api/me/preferences': 'signed-in',
   'POST /api/slabs/:id/hold': 'signed-in',
   'POST /api/holds/matched-set': 'signed-in',
   'GET /api/holds': 'signed-in',

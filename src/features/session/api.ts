@@ -3,6 +3,7 @@ import { redirect } from 'react-router';
 import { apiFetch, ApiError } from '../../lib/api-client';
 import { paths } from '../../paths';
 import type { ChangeEmailInput, ChangePasswordInput, ForgotPasswordInput, SignInInput, SignUpInput, UpdateNameInput } from '../../../shared/accounts';
+import type { Preferences, PreferencesInput } from '../../../shared/preferences';
 
 export type Role = 'buyer' | 'seller' | 'admin';
 export type Me = { id: string; email: string; name: string; role: Role };
@@ -135,5 +136,25 @@ export function useUpdateName() {
 export function useChangeEmail() {
   return useMutation({
     mutationFn: ({ newEmail }: ChangeEmailInput) => authPost('/change-email', { newEmail, callbackURL: `${paths.account()}?email=changed` }),
+  });
+}
+
+// --- display preferences kept on the account ---
+
+export const preferencesKeys = { mine: ['preferences'] as const };
+
+export const preferencesQuery = () =>
+  queryOptions({
+    queryKey: preferencesKeys.mine,
+    queryFn: () => apiFetch<Preferences>('/api/me/preferences'),
+    staleTime: 5 * 60_000,
+  });
+
+export function useSavePreferences() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: PreferencesInput) => apiFetch<Preferences>('/api/me/preferences', { method: 'PUT', body: input }),
+    onMutate: (input) => { queryClient.setQueryData(preferencesKeys.mine, { units: input.units }); },
+    onSuccess: (saved) => { queryClient.setQueryData(preferencesKeys.mine, saved); },
   });
 }
