@@ -4,6 +4,10 @@ import { parseInches } from './wood/format';
 export const SLAB_STATUSES = ['drying', 'ready', 'listed', 'held', 'sold', 'picked-up', 'withdrawn'] as const;
 export type SlabStatus = (typeof SLAB_STATUSES)[number];
 
+/** A slab in these statuses has been paid for: its price is the one its sale recorded, never recomputed. */
+export const SOLD_STATUSES: readonly SlabStatus[] = ['sold', 'picked-up'];
+export const isSold = (status: string) => (SOLD_STATUSES as readonly string[]).includes(status);
+
 /** Statuses a visitor can see in the catalogue and on a slab page. */
 export const PUBLIC_STATUSES: readonly SlabStatus[] = ['drying', 'ready', 'listed', 'held', 'sold', 'picked-up'];
 
@@ -105,7 +109,8 @@ export type SlabListItem = {
   widthIn: number;
   lengthIn: number;
   boardFeet: number;
-  priceCents: number;
+  /** Asking price; for a sold slab the price it sold at, or null when no sale was recorded ("Sold"). */
+  priceCents: number | null;
   status: SlabStatus;
   dryingState: string;
   moisturePercent: number | null;
@@ -136,7 +141,7 @@ export type MoistureReadingView = {
 
 export type LogNeighbour = {
   id: number; code: string; sequenceInLog: number; status: SlabStatus; thicknessIn: number;
-  widthIn: number; lengthIn: number; priceCents: number; coverThumbUrl: string | null; isThisSlab: boolean;
+  widthIn: number; lengthIn: number; priceCents: number | null; coverThumbUrl: string | null; isThisSlab: boolean;
 };
 
 export type SlabDetail = Omit<SlabListItem, 'species'> & {
@@ -154,7 +159,8 @@ export type SlabDetail = Omit<SlabListItem, 'species'> & {
   photos: SlabPhotoView[];
   moistureReadings: MoistureReadingView[];
   neighbours: LogNeighbour[];
-  priceBreakdown: PriceBreakdownView;
+  /** How the price is worked out; for a sold slab the breakdown recorded at its sale (null when none was). */
+  priceBreakdown: PriceBreakdownView | null;
   /** Estimated weight at the latest reading (or at the mill's air-dry assumption when none). */
   weightLb: number;
   weightAtMcPercent: number;
@@ -163,6 +169,12 @@ export type SlabDetail = Omit<SlabListItem, 'species'> & {
   targetMcPercent: number;
   flatteningPriceCents: number;
 };
+
+/** The price as a buyer reads it: "$1,234.00", "Sold for $1,234.00", or just "Sold". */
+export function priceWords(status: string, priceCents: number | null, format: (cents: number) => string): string {
+  if (!isSold(status)) return priceCents === null ? '' : format(priceCents);
+  return priceCents === null ? 'Sold' : `Sold for ${format(priceCents)}`;
+}
 
 /** What each status means to a buyer, in Stickerline's words. */
 export const STATUS_LABELS: Record<SlabStatus, string> = {

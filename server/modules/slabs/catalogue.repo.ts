@@ -1,11 +1,13 @@
 import { and, asc, desc, eq, gte, inArray, lte, ne, or, sql, ilike, type SQL } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
 import { logs, moistureReadings, slabPhotos, slabs, species } from '../../db/schema/index';
+import { shownPriceCents } from '../pricing/sold-price';
+import { vouchedFor } from '../readings/reading-visibility';
 import { AVAILABILITY, type SlabListQuery, type SlabStatus } from '../../../shared/slabs';
 
 const latestMoisture = sql<number | null>`(
   select ${moistureReadings.mcPercent} from ${moistureReadings}
-  where ${moistureReadings.slabId} = ${slabs.id}
+  where ${moistureReadings.slabId} = ${slabs.id} and ${vouchedFor}
   order by ${moistureReadings.measuredOn} desc, ${moistureReadings.id} desc limit 1)`;
 
 const coverKey = sql<string | null>`(
@@ -47,7 +49,7 @@ const orderFor = (sort: SlabListQuery['sort']) => {
 const listColumns = {
   id: slabs.id, code: slabs.code, speciesSlug: species.slug, speciesName: species.name,
   thicknessIn: slabs.thicknessIn, widthIn: slabs.widthIn, lengthIn: slabs.lengthIn,
-  boardFeet: slabs.boardFeet, priceCents: slabs.priceCents, status: slabs.status,
+  boardFeet: slabs.boardFeet, priceCents: shownPriceCents, status: slabs.status,
   dryingState: slabs.dryingState, liveEdge: slabs.liveEdge, figures: slabs.figures,
   logId: slabs.logId, sequenceInLog: slabs.sequenceInLog,
   moisturePercent: latestMoisture, coverKey,
@@ -100,14 +102,14 @@ export function findPhotos(db: Tx, slabId: number) {
 }
 
 export function findReadings(db: Tx, slabId: number) {
-  return db.select().from(moistureReadings).where(eq(moistureReadings.slabId, slabId))
+  return db.select().from(moistureReadings).where(and(eq(moistureReadings.slabId, slabId), vouchedFor))
     .orderBy(asc(moistureReadings.measuredOn), asc(moistureReadings.id));
 }
 
 export function findLogSequence(db: Tx, logId: number) {
   return db
     .select({ id: slabs.id, code: slabs.code, sequenceInLog: slabs.sequenceInLog, status: slabs.status,
-      thicknessIn: slabs.thicknessIn, widthIn: slabs.widthIn, lengthIn: slabs.lengthIn, priceCents: slabs.priceCents, coverKey })
+      thicknessIn: slabs.thicknessIn, widthIn: slabs.widthIn, lengthIn: slabs.lengthIn, priceCents: shownPriceCents, coverKey })
     .from(slabs)
     .where(eq(slabs.logId, logId))
     .orderBy(asc(slabs.sequenceInLog));

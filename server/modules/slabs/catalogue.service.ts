@@ -1,9 +1,10 @@
 import type { Tx } from '../../db/client';
 import { AppError, notFound, validationError, zodFieldErrors } from '../../lib/errors';
-import { parseSlabListQuery, PUBLIC_STATUSES, type SlabDetail, type SlabListItem, type SlabListResponse, type SlabStatus } from '../../../shared/slabs';
+import { isSold, parseSlabListQuery, PUBLIC_STATUSES, type SlabDetail, type SlabListItem, type SlabListResponse, type SlabStatus } from '../../../shared/slabs';
 import { photoUrls } from '../../../shared/photos';
 import { airDryReadyDate, lifting, roundBoardFeet } from '../../../shared/wood/index';
 import { quoteSlab } from '../pricing/slab-quote';
+import { slabPartOf, soldLineOf } from '../pricing/sold-price';
 import { loadPricingRules } from '../pricing/pricing.service';
 import { readMillSettings } from '../pricing/pricing.repo';
 import * as repo from './catalogue.repo';
@@ -42,17 +43,24 @@ export async function getSlabDetail(db: Tx, id: number, { includeHidden = false 
   const found = await repo.findSlabWithLog(db, id);
   if (!found || (!includeHidden && !PUBLIC_STATUSES.includes(found.slab.status as SlabStatus))) throw notFound('That slab');
   const { slab, species, log } = found;
-  const [photos, readings, sequence, rules, settings] = await Promise.all([
+  const sold = isSold(slab.status);
+  const [photos, readings, sequence, rules, settings, soldLine] = await Promise.all([
     repo.findPhotos(db, id), repo.findReadings(db, id), repo.findLogSequence(db, log.id),
-    loadPricingRules(db), readMillSettings(db),
+    loadPricingRules(db), readMillSettings(db), sold ? soldLineOf(db, id) : null,
   ]);
   const latest = readings.at(-1) ?? null;
   const quote = quoteSlab(slab, species, latest?.mcPercent ?? null, rules);
+  // A sold slab shows what it sold at (its order line), never a price worked out from today's rules.
+  const price = !sold
+    ? { priceCents: slab.priceCents, priceBreakdown: quote.breakdown }
+    : soldLine
+      ? { priceCents: soldLine.slabCents, priceBreakdown: slabPartOf(soldLine.priceBreakdown, soldLine.slabCents) }
+      : { priceCents: null, priceBreakdown: null };
   return {
     id: slab.id, code: slab.code,
     species: { slug: species.slug, name: species.name, botanicalName: species.botanicalName, ratePerBoardFootCents: species.ratePerBoardFootCents },
     thicknessIn: slab.thicknessIn, widthIn: round1(slab.widthIn), widthsIn: slab.widthsIn, lengthIn: slab.lengthIn,
-    boardFeet: roundBoardFeet(slab.boardFeet), priceCents: slab.priceCents,
+    boardFeet: roundBoardFeet(slab.boardFeet), priceCents: price.priceCents,
     status: slab.status as SlabStatus, dryingState: slab.dryingState,
     moisturePercent: latest?.mcPercent ?? null,
     coverPhotoUrl: display(photos[0]?.fileKey ?? null), coverThumbUrl: thumb(photos[0]?.fileKey ?? null),
@@ -67,7 +75,7 @@ export async function getSlabDetail(db: Tx, id: number, { includeHidden = false 
     neighbours: sequence
       .filter((n) => includeHidden || PUBLIC_STATUSES.includes(n.status as SlabStatus))
       .map((n) => ({ ...n, status: n.status as SlabStatus, coverThumbUrl: thumb(n.coverKey), isThisSlab: n.id === slab.id, coverKey: undefined })),
-    priceBreakdown: quote.breakdown,
+    priceBreakdown: price.priceBreakdown,
     weightLb: Math.round(quote.weightLb),
     weightAtMcPercent: quote.mcPercent,
     lifting: lifting({ weightLb: quote.weightLb }),

@@ -1,5 +1,6 @@
 import { and, asc, desc, eq, ilike, inArray, ne, or, sql, type SQL } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
+import { vouchedFor } from '../readings/reading-visibility';
 import { figureKinds, logs, moistureReadings, slabPhotos, slabs, species } from '../../db/schema/index';
 import type { YardSlabQuery, YardSort } from '../../../shared/slab-input';
 
@@ -106,7 +107,7 @@ export async function existingFigureSlugs(tx: Tx, slugs: string[]) {
 
 export async function latestReadingOf(tx: Tx, slabId: number) {
   const [row] = await tx.select({ mcPercent: moistureReadings.mcPercent, measuredOn: moistureReadings.measuredOn })
-    .from(moistureReadings).where(eq(moistureReadings.slabId, slabId))
+    .from(moistureReadings).where(and(eq(moistureReadings.slabId, slabId), vouchedFor))
     .orderBy(desc(moistureReadings.measuredOn), desc(moistureReadings.id)).limit(1);
   return row ?? null;
 }

@@ -4,7 +4,7 @@ import { recordAudit } from '../../lib/audit';
 import type { SessionUser } from '../../lib/session';
 import { dryingStateFor, roundBoardFeet } from '../../../shared/wood/index';
 import { createSlabSchema, updateSlabSchema, type YardSlabDetail, type YardSlabRow } from '../../../shared/slab-input';
-import type { SlabStatus } from '../../../shared/slabs';
+import { isSold, type SlabStatus } from '../../../shared/slabs';
 import { loadPricingRules } from '../pricing/pricing.service';
 import { readMillSettings } from '../pricing/pricing.repo';
 import { isUniqueViolation } from '../logs/logs.repo';
@@ -120,7 +120,9 @@ export async function updateSlab(db: Db, id: number, raw: unknown, actor: Sessio
       thicknessIn: input.thicknessIn ?? slab.thicknessIn, widthsIn: input.widthsIn ?? slab.widthsIn,
       lengthIn: input.lengthIn ?? slab.lengthIn, figures: input.figures ?? slab.figures,
     };
-    const derived = derivedSlabColumns({ ...measures, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason }, await repo.speciesRate(tx, slab.speciesId), await loadPricingRules(tx));
+    const worked = derivedSlabColumns({ ...measures, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason }, await repo.speciesRate(tx, slab.speciesId), await loadPricingRules(tx));
+    // A sold slab keeps the price it sold at, whatever is corrected on its record afterwards.
+    const derived = isSold(from) ? { ...worked, priceCents: slab.priceCents } : worked;
     const { status: _s, priceOverrideCents: _c, priceOverrideReason: _r, ...rest } = input;
     const after = await repo.updateSlab(tx, id, {
       ...rest, ...measures, ...derived, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason,

@@ -7,7 +7,7 @@ import { PageTitle } from '../../../components/ui/page-title';
 import { friendlyMessage } from '../../../lib/api-client';
 import { paths } from '../../../paths';
 import { MAX_COMPARE } from '../../../../shared/buyer-lists';
-import { LIVE_EDGE_LABELS, STATUS_LABELS, type SlabDetail } from '../../../../shared/slabs';
+import { LIVE_EDGE_LABELS, priceWords, STATUS_LABELS, type SlabDetail } from '../../../../shared/slabs';
 import { DRYING_STATES, formatCents, toSixteenths } from '../../../../shared/wood/index';
 import { DEFECT_LABELS } from '../../../../shared/slab-input';
 import { compareQuery, useCompareList } from '../api';
@@ -19,13 +19,13 @@ type Row = { label: string; cell: (s: SlabDetail) => ReactNode };
 const inches = (n: number) => `${toSixteenths(n)}″`;
 
 const ROWS: Row[] = [
-  { label: 'Price', cell: (s) => <strong>{formatCents(s.priceBreakdown.totalCents)}</strong> },
+  { label: 'Price', cell: (s) => <strong>{priceWords(s.status, s.priceBreakdown?.totalCents ?? s.priceCents, formatCents)}</strong> },
   { label: 'Availability', cell: (s) => STATUS_LABELS[s.status] },
   { label: 'Thickness', cell: (s) => inches(s.thicknessIn) },
   { label: 'Average width', cell: (s) => inches(s.widthIn) },
   { label: 'Length', cell: (s) => inches(s.lengthIn) },
   { label: 'Board feet', cell: (s) => s.boardFeet.toFixed(2) },
-  { label: 'Price per board foot', cell: (s) => formatCents(Math.round(s.priceBreakdown.slabCents / Math.max(s.boardFeet, 0.01))) },
+  { label: 'Price per board foot', cell: (s) => (s.priceBreakdown ? formatCents(Math.round(s.priceBreakdown.slabCents / Math.max(s.boardFeet, 0.01))) : '—') },
   { label: 'Weight (estimate)', cell: (s) => `about ${s.weightLb} lb at ${s.weightAtMcPercent} % MC` },
   { label: 'Moisture content', cell: (s) => (s.moisturePercent === null ? 'No reading yet' : `${s.moisturePercent} % (target ${s.targetMcPercent} %)`) },
   { label: 'Drying', cell: (s) => DRYING_STATES.find((d) => d.state === s.dryingState)?.label ?? s.dryingState },

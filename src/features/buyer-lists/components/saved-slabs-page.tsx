@@ -7,7 +7,7 @@ import { PageTitle } from '../../../components/ui/page-title';
 import { Tag } from '../../../components/ui/tag';
 import { friendlyMessage } from '../../../lib/api-client';
 import { paths } from '../../../paths';
-import { STATUS_LABELS } from '../../../../shared/slabs';
+import { priceWords, STATUS_LABELS } from '../../../../shared/slabs';
 import { formatCents, toSixteenths } from '../../../../shared/wood/index';
 import { savedSlabsQuery, useCompareList, useUnsaveSlab } from '../api';
 
@@ -33,7 +33,7 @@ export function SavedSlabsPage() {
                 <p className="text-sm text-ink-soft">{toSixteenths(s.thicknessIn)}″ × {toSixteenths(s.widthIn)}″ × {toSixteenths(s.lengthIn)}″ · {s.boardFeet} bd ft</p>
                 <Tag tone={s.status === 'listed' ? 'moss' : s.status === 'held' ? 'caution' : 'neutral'}>{STATUS_LABELS[s.status]}</Tag>
               </div>
-              <p className="font-bold">{formatCents(s.priceCents)}</p>
+              <p className="font-bold">{priceWords(s.status, s.priceCents, formatCents)}</p>
               <div className="flex flex-wrap gap-2">
                 {compare.has(s.id) ? (
                   <Button variant="secondary" onClick={() => compare.remove(s.id)} aria-label={`Take off compare: slab ${s.code}`}>Take off compare</Button>

@@ -1,6 +1,6 @@
 import { Link } from 'react-router';
 import type { LogNeighbour } from '../../../../shared/slabs';
-import { areBookMatched, STATUS_LABELS } from '../../../../shared/slabs';
+import { areBookMatched, isSold, priceWords, STATUS_LABELS } from '../../../../shared/slabs';
 import { formatCents } from '../../../../shared/wood/index';
 import { Length } from '../../../lib/units';
 import { paths } from '../../../paths';
@@ -24,7 +24,7 @@ export function LogSequence({ logId, neighbours }: { logId: number; neighbours: 
             )}
             {n.coverThumbUrl && <img src={n.coverThumbUrl} alt="" className="my-1 h-12 w-full rounded object-cover" />}
             <p><Length inches={n.thicknessIn} /> × <Length inches={n.widthIn} /></p>
-            <p>{STATUS_LABELS[n.status]}{n.status === 'listed' ? ` · ${formatCents(n.priceCents)}` : ''}</p>
+            <p>{isSold(n.status) ? priceWords(n.status, n.priceCents, formatCents) : STATUS_LABELS[n.status]}{n.status === 'listed' && n.priceCents !== null ? ` · ${formatCents(n.priceCents)}` : ''}</p>
             {partner && !n.isThisSlab && <p className="font-semibold text-moss">Book-matched partner</p>}
           </li>
         );

@@ -10,7 +10,7 @@ import { MeasurementsTable } from './measurements-table';
 import { PageTitle } from '../../../components/ui/page-title';
 import { Tag } from '../../../components/ui/tag';
 import { paths } from '../../../paths';
-import { STATUS_LABELS, SAWING_METHOD_LABELS } from '../../../../shared/slabs';
+import { isSold, priceWords, STATUS_LABELS, SAWING_METHOD_LABELS } from '../../../../shared/slabs';
 import { DRYING_STATES, formatCents } from '../../../../shared/wood/index';
 
 const MoistureChart = lazy(() => import('./moisture-chart'));
@@ -41,9 +41,11 @@ export function SlabPage({ slots = {} }: { slots?: SlabPageSlots }) {
               {drying && <Tag tone="accent">{drying.label}</Tag>}
             </div>
           </div>
-          <p className="text-3xl font-bold text-accent-strong">{formatCents(slab.priceBreakdown.totalCents)}</p>
+          <p className="text-3xl font-bold text-accent-strong">{priceWords(slab.status, slab.priceBreakdown?.totalCents ?? slab.priceCents, formatCents)}</p>
           {slots.actions?.(slab.id)}
-          <PriceBreakdown breakdown={slab.priceBreakdown} />
+          {slab.priceBreakdown && (
+            <PriceBreakdown breakdown={slab.priceBreakdown} caption={isSold(slab.status) ? 'How the price was worked out when it sold' : undefined} />
+          )}
           <WeightCaution slab={slab} />
         </div>
       </div>
