@@ -131,6 +131,8 @@ export type PriceBreakdownView = { boardFeet: number; lines: PriceLine[]; slabCe
 export type SlabPhotoView = {
   id: number; displayUrl: string; thumbUrl: string; width: number; height: number;
   isCover: boolean; isIllustration: boolean; altText: string; position: number;
+  /** Which side of the slab it shows (PHOTO_VIEWS in shared/photos.ts), or null. */
+  view: string | null;
 };
 
 export type MoistureReadingView = {
