@@ -26,6 +26,7 @@ import { yardSlabRoutes } from './modules/slabs/yard-slabs.routes';
 import { officeRoutes } from './modules/office/office.routes';
 import { millRulesRoutes } from './modules/mill-rules/mill-rules.routes';
 import { readingRoutes } from './modules/readings/readings.routes';
+import { buyerListRoutes } from './modules/buyer-lists/buyer-lists.routes';
 import { shopAddressRoutes } from './modules/shop-address/shop-address.routes';
 import { matchedSetRoutes } from './modules/matched-sets/matched-sets.routes';
 
@@ -94,6 +95,7 @@ export function createApp(deps: AppDeps) {
   api.use(accountRoutes(deps));
   api.use(preferenceRoutes(deps));
   api.use(holdRoutes(deps));
+  api.use(buyerListRoutes(deps));
   api.use(checkoutRoutes(deps));
   api.use(pickupRoutes(deps));
   api.use(photoRoutes(deps));

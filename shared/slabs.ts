@@ -1,3 +1,4 @@
+import type { DryingForecast, LiftingAdvice } from './wood/index';
 import { z } from 'zod';
 import type { MatchedSetView } from './matched-sets';
 import { parseInches } from './wood/format';
@@ -131,6 +132,8 @@ export type PriceBreakdownView = { boardFeet: number; lines: PriceLine[]; slabCe
 export type SlabPhotoView = {
   id: number; displayUrl: string; thumbUrl: string; width: number; height: number;
   isCover: boolean; isIllustration: boolean; altText: string; position: number;
+  /** Which side of the slab it shows (PHOTO_VIEWS in shared/photos.ts), or null. */
+  view: string | null;
 };
 
 export type MoistureReadingView = {
@@ -162,10 +165,15 @@ export type SlabDetail = Omit<SlabListItem, 'species'> & {
   matchedSet: MatchedSetView | null;
   /** How the price is worked out; for a sold slab the breakdown recorded at its sale (null when none was). */
   priceBreakdown: PriceBreakdownView | null;
-  /** Estimated weight at the latest reading (or at the mill's air-dry assumption when none). */
+  /** Estimated weight at the latest reading, or at the species' typical green MC when there is none. */
   weightLb: number;
   weightAtMcPercent: number;
-  lifting: { peopleNeeded: number; needsEquipment: boolean; message: string };
+  /** Whether the weight uses a reading or the typical green MC, and a sentence saying so. */
+  weightBasis: 'reading' | 'typical-green';
+  weightNote: string;
+  lifting: LiftingAdvice;
+  /** When the slab should reach the air-dry line, from its own readings (or the rule of thumb). */
+  dryingForecast: DryingForecast;
   airDryReadyOn: string | null;
   targetMcPercent: number;
   flatteningPriceCents: number;

@@ -12,6 +12,9 @@ export type Access = 'public' | 'signed-in' | 'staff' | 'admin' | 'signature' | 
 export const ACCESS: Record<string, Access> = {
   'ALL /api/auth/{*any}': 'auth-lib',
   'POST /api/auth/sign-in/email': 'public',
+  // Checked in front of the library (name and e-mail rules); the library itself demands a session.
+  'POST /api/auth/update-user': 'auth-lib',
+  'POST /api/auth/change-email': 'auth-lib',
   'POST /api/webhooks/payments': 'signature',
   'GET /api/health': 'public',
   'GET /api/slabs': 'public',
@@ -25,6 +28,13 @@ export const ACCESS: Record<string, Access> = {
   'POST /api/holds/matched-set': 'signed-in',
   'GET /api/holds': 'signed-in',
   'DELETE /api/holds/:id': 'signed-in',
+  'GET /api/compare': 'public',
+  'GET /api/me/slab-marks': 'signed-in',
+  'GET /api/saved-slabs': 'signed-in',
+  'PUT /api/saved-slabs/:slabId': 'signed-in',
+  'DELETE /api/saved-slabs/:slabId': 'signed-in',
+  'POST /api/slabs/:id/watch': 'signed-in',
+  'DELETE /api/slabs/:id/watch': 'signed-in',
   'POST /api/checkout': 'signed-in',
   'GET /api/orders': 'signed-in',
   'GET /api/orders/:id': 'signed-in',

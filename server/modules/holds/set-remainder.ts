@@ -5,7 +5,7 @@ import { recordAudit } from '../../lib/audit';
 import type { SessionUser } from '../../lib/session';
 import { queueEmail } from '../../lib/outbox';
 import { layout } from '../../lib/email-templates';
-import { millTimeZone } from '../pickups/slot-calendar';
+import { millDateTime } from '../pickups/slot-calendar';
 
 export type SetMemberLeft = 'released-by-buyer' | 'released-by-office' | 'expired' | 'refunded';
 
@@ -15,10 +15,6 @@ const WHY: Record<SetMemberLeft, string> = {
   expired: 'ran out of hold time',
   refunded: 'was refunded',
 };
-
-/** "Thu 3 Dec 2026, 14:05" in the mill's time zone, as the yard would say it. */
-export const millTime = (at: Date) =>
-  new Intl.DateTimeFormat('en-GB', { timeZone: millTimeZone(), weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(at);
 
 /**
  * One slab of a book-matched set held together left the set's holds. The rule (decided once): the
@@ -48,7 +44,7 @@ export async function tellAboutRestOfSet(
       content: layout(title, [
         `Hello ${rest[0].name},`,
         `Slab ${goneCodes.join(' and ')} of the book-matched set you reserved ${WHY[why]}.`,
-        `The rest of the set — ${restCodes.join(', ')} — stays held for you until ${millTime(until)} (mill time). Check out before then to keep ${restCodes.length === 1 ? 'it' : 'them'}; if you only wanted the whole set, release ${restCodes.length === 1 ? 'it' : 'them'} from your reservations so another buyer can have ${restCodes.length === 1 ? 'it' : 'them'}.`,
+        `The rest of the set — ${restCodes.join(', ')} — stays held for you until ${millDateTime(until)} (mill time). Check out before then to keep ${restCodes.length === 1 ? 'it' : 'them'}; if you only wanted the whole set, release ${restCodes.length === 1 ? 'it' : 'them'} from your reservations so another buyer can have ${restCodes.length === 1 ? 'it' : 'them'}.`,
       ], { label: 'Your reservations', url: `${publicUrl}/reservations` }),
     });
     for (const g of gone) {

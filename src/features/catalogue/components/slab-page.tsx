@@ -7,6 +7,7 @@ import { PriceBreakdown } from './price-breakdown';
 import { LogSequence } from './log-sequence';
 import { WeightCaution } from './weight-caution';
 import { MeasurementsTable } from './measurements-table';
+import { DryingForecastNote } from '../../../components/wood/drying-forecast';
 import { PageTitle } from '../../../components/ui/page-title';
 import { Tag } from '../../../components/ui/tag';
 import { paths } from '../../../paths';
@@ -80,11 +81,10 @@ export function SlabPage({ slots = {} }: { slots?: SlabPageSlots }) {
           <p className="mt-2 text-sm">
             {slab.moisturePercent !== null && <>Latest reading {slab.moisturePercent} % MC ({slab.moistureReadings.at(-1)?.meterKind} meter, {slab.moistureReadings.at(-1)?.measuredOn}). </>}
             {drying && <>{drying.description} </>}
-            {slab.airDryReadyOn && (slab.airDryReadyOn > new Date().toISOString().slice(0, 10)
-              ? <>Estimated air-dry by {slab.airDryReadyOn} (rule of thumb: about a year per inch of thickness). </>
-              : <>It has had its year per inch of air drying (rule of thumb) since {slab.airDryReadyOn}. </>)}
-            The mill's target for furniture stock is {slab.targetMcPercent} % MC.
+            The mill's target for furniture stock is {slab.targetMcPercent} % MC; outdoors a slab only dries to about the yard's
+            average equilibrium moisture, so the last step happens indoors.
           </p>
+          <div className="mt-2"><DryingForecastNote forecast={slab.dryingForecast} /></div>
         </div>
       </section>
 
