@@ -7,6 +7,8 @@ import { PriceBreakdown } from './price-breakdown';
 import { LogSequence } from './log-sequence';
 import { WeightCaution } from './weight-caution';
 import { MeasurementsTable } from './measurements-table';
+import { SafetyNotice } from '../../../components/safety-caution';
+import { FINISHING_CAUTION } from '../../../../shared/safety';
 import { DryingForecastNote } from '../../../components/wood/drying-forecast';
 import { PageTitle } from '../../../components/ui/page-title';
 import { Tag } from '../../../components/ui/tag';
@@ -70,6 +72,9 @@ export function SlabPage({ slots = {} }: { slots?: SlabPageSlots }) {
         <div>
           <h2 id="measures" className="mb-2 text-xl font-bold">Measurements</h2>
           <MeasurementsTable slab={slab} />
+          {slab.defects.some((d) => /epoxy|resin|fill|finish|oil/i.test(d.note)) && (
+            <div className="mt-2"><SafetyNotice caution={FINISHING_CAUTION} /></div>
+          )}
         </div>
         <div>
           <h2 className="mb-2 text-xl font-bold">Drying history</h2>
