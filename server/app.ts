@@ -26,7 +26,9 @@ import { yardSlabRoutes } from './modules/slabs/yard-slabs.routes';
 import { officeRoutes } from './modules/office/office.routes';
 import { millRulesRoutes } from './modules/mill-rules/mill-rules.routes';
 import { readingRoutes } from './modules/readings/readings.routes';
+import { buyerListRoutes } from './modules/buyer-lists/buyer-lists.routes';
 import { shopAddressRoutes } from './modules/shop-address/shop-address.routes';
+import { matchedSetRoutes } from './modules/matched-sets/matched-sets.routes';
 
 export type AppDeps = {
   db: Db;
@@ -93,12 +95,14 @@ export function createApp(deps: AppDeps) {
   api.use(accountRoutes(deps));
   api.use(preferenceRoutes(deps));
   api.use(holdRoutes(deps));
+  api.use(buyerListRoutes(deps));
   api.use(checkoutRoutes(deps));
   api.use(pickupRoutes(deps));
   api.use(photoRoutes(deps));
   api.use(logRoutes(deps));
   api.use(yardSlabRoutes(deps));
   api.use(readingRoutes(deps));
+  api.use(matchedSetRoutes(deps));
   api.use(officeRoutes(deps));
   api.use(millRulesRoutes(deps));
   api.use(shopAddressRoutes({ publicUrl: deps.publicUrl ?? deps.trustedOrigins?.[0] ?? 'http://localhost:3000' }));

@@ -70,3 +70,9 @@ export function findExpiredHolds(tx: Tx, now: Date) {
 export function findLogNeighbours(tx: Tx, ids: number[]) {
   return tx.select().from(slabs).where(inArray(slabs.id, ids));
 }
+
+/** Code and species of each slab, for messages about them. */
+export function slabLabels(tx: Tx, ids: number[]) {
+  return tx.select({ code: slabs.code, speciesName: species.name }).from(slabs)
+    .innerJoin(species, eq(species.id, slabs.speciesId)).where(inArray(slabs.id, ids)).orderBy(asc(slabs.code));
+}

@@ -45,16 +45,28 @@ const orderFor = (sort: SlabListQuery['sort']) => {
   }
 };
 
+/** The columns a catalogue card needs. */
+const listColumns = {
+  id: slabs.id, code: slabs.code, speciesSlug: species.slug, speciesName: species.name,
+  thicknessIn: slabs.thicknessIn, widthIn: slabs.widthIn, lengthIn: slabs.lengthIn,
+  boardFeet: slabs.boardFeet, priceCents: shownPriceCents, status: slabs.status,
+  dryingState: slabs.dryingState, liveEdge: slabs.liveEdge, figures: slabs.figures,
+  logId: slabs.logId, sequenceInLog: slabs.sequenceInLog,
+  moisturePercent: latestMoisture, coverKey,
+};
+export type SlabListRow = Awaited<ReturnType<typeof findListRowsByIds>>[number];
+
+/** Catalogue cards for the given slabs (any status; callers decide what may be shown). */
+export function findListRowsByIds(db: Tx, ids: number[]) {
+  if (!ids.length) return Promise.resolve([]);
+  return db.select(listColumns).from(slabs).innerJoin(species, eq(species.id, slabs.speciesId)).where(inArray(slabs.id, ids));
+}
+
 export async function findSlabPage(db: Tx, q: SlabListQuery) {
   const where = whereFor(q);
   const rows = await db
     .select({
-      id: slabs.id, code: slabs.code, speciesSlug: species.slug, speciesName: species.name,
-      thicknessIn: slabs.thicknessIn, widthIn: slabs.widthIn, lengthIn: slabs.lengthIn,
-      boardFeet: slabs.boardFeet, priceCents: shownPriceCents, status: slabs.status,
-      dryingState: slabs.dryingState, liveEdge: slabs.liveEdge, figures: slabs.figures,
-      logId: slabs.logId, sequenceInLog: slabs.sequenceInLog,
-      moisturePercent: latestMoisture, coverKey,
+      ...listColumns,
       // The total rides along with the page (one query instead of two).
       total: sql<number>`(count(*) over ())::int`,
     })

@@ -2,7 +2,7 @@ import { queryOptions, useMutation, useQueryClient, type QueryClient } from '@ta
 import { redirect } from 'react-router';
 import { apiFetch, ApiError } from '../../lib/api-client';
 import { paths } from '../../paths';
-import type { ChangePasswordInput, ForgotPasswordInput, SignInInput, SignUpInput } from '../../../shared/accounts';
+import type { ChangeEmailInput, ChangePasswordInput, ForgotPasswordInput, SignInInput, SignUpInput, UpdateNameInput } from '../../../shared/accounts';
 import type { Preferences, PreferencesInput } from '../../../shared/preferences';
 
 export type Role = 'buyer' | 'seller' | 'admin';
@@ -121,6 +121,21 @@ export function useResetPassword() {
   return useMutation({
     mutationFn: ({ token, newPassword }: { token: string; newPassword: string }) =>
       authPost('/reset-password', { token, newPassword }),
+  });
+}
+
+export function useUpdateName() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ name }: UpdateNameInput) => authPost('/update-user', { name }),
+    onSuccess: () => queryClient.fetchQuery({ ...meQuery(), staleTime: 0 }),
+  });
+}
+
+/** Sends a confirmation link to the new address; the account keeps its old one until it is opened. */
+export function useChangeEmail() {
+  return useMutation({
+    mutationFn: ({ newEmail }: ChangeEmailInput) => authPost('/change-email', { newEmail, callbackURL: `${paths.account()}?email=changed` }),
   });
 }
 
