@@ -17,6 +17,7 @@ import { sameOriginOnly } from './lib/same-origin';
 import { writeLimit } from './lib/write-limit';
 import { catalogueRoutes } from './modules/slabs/catalogue.routes';
 import { accountRoutes } from './modules/accounts/accounts.routes';
+import { preferenceRoutes } from './modules/accounts/preferences.routes';
 import { holdRoutes } from './modules/holds/holds.routes';
 import { checkoutRoutes } from './modules/checkout/checkout.routes';
 import { pickupRoutes } from './modules/pickups/pickups.routes';
@@ -28,6 +29,7 @@ import { yardSlabRoutes } from './modules/slabs/yard-slabs.routes';
 import { officeRoutes } from './modules/office/office.routes';
 import { millRulesRoutes } from './modules/mill-rules/mill-rules.routes';
 import { readingRoutes } from './modules/readings/readings.routes';
+import { buyerListRoutes } from './modules/buyer-lists/buyer-lists.routes';
 import { shopAddressRoutes } from './modules/shop-address/shop-address.routes';
 
 export type AppDeps = {
@@ -103,7 +105,9 @@ export function createApp(deps: AppDeps) {
   api.use(healthRoutes(deps));
   api.use(catalogueRoutes(deps));
   api.use(accountRoutes(deps));
+  api.use(preferenceRoutes(deps));
   api.use(holdRoutes(deps));
+  api.use(buyerListRoutes(deps));
   api.use(checkoutRoutes(deps));
   api.use(pickupRoutes(deps));
   api.use(photoRoutes(deps));
