@@ -1,9 +1,15 @@
+import type { DryingForecast, LiftingAdvice } from './wood/index';
 import { z } from 'zod';
+import type { MatchedSetView } from './matched-sets';
 import { parseInches } from './wood/format';
 import { DRYING_STATES, type DryingState } from './wood/drying';
 
 export const SLAB_STATUSES = ['drying', 'ready', 'listed', 'held', 'sold', 'picked-up', 'withdrawn'] as const;
 export type SlabStatus = (typeof SLAB_STATUSES)[number];
+
+/** A slab in these statuses has been paid for: its price is the one its sale recorded, never recomputed. */
+export const SOLD_STATUSES: readonly SlabStatus[] = ['sold', 'picked-up'];
+export const isSold = (status: string) => (SOLD_STATUSES as readonly string[]).includes(status);
 
 /** Statuses a visitor can see in the catalogue and on a slab page. */
 export const PUBLIC_STATUSES: readonly SlabStatus[] = ['drying', 'ready', 'listed', 'held', 'sold', 'picked-up'];
@@ -33,7 +39,8 @@ export const SLAB_SORT_LABELS: Record<(typeof SLAB_SORTS)[number], string> = {
   'board-feet-asc': 'Fewest board feet',
 };
 
-const DRYING_STATE_VALUES = ['green', 'air-drying', 'air-dry', 'shop-dry'] as const satisfies readonly DryingState[];
+/** Drying states as stored (the words for them live in shared/wood DRYING_STATES). */
+export const DRYING_STATE_VALUES = ['green', 'air-drying', 'air-dry', 'shop-dry'] as const;
 
 /** A drying state's words (the list and its words live together in shared/wood/drying.ts). */
 export const dryingStateLabel = (state: string) => DRYING_STATES.find((s) => s.state === state)?.label ?? 'Not measured yet';
@@ -109,7 +116,8 @@ export type SlabListItem = {
   widthIn: number;
   lengthIn: number;
   boardFeet: number;
-  priceCents: number;
+  /** Asking price; for a sold slab the price it sold at, or null when no sale was recorded ("Sold"). */
+  priceCents: number | null;
   status: SlabStatus;
   dryingState: string;
   moisturePercent: number | null;
@@ -129,6 +137,8 @@ export type PriceBreakdownView = { boardFeet: number; lines: PriceLine[]; slabCe
 export type SlabPhotoView = {
   id: number; displayUrl: string; thumbUrl: string; width: number; height: number;
   isCover: boolean; isIllustration: boolean; altText: string; position: number;
+  /** Which side of the slab it shows (PHOTO_VIEWS in shared/photos.ts), or null. */
+  view: string | null;
 };
 
 export type MoistureReadingView = {
@@ -138,7 +148,7 @@ export type MoistureReadingView = {
 
 export type LogNeighbour = {
   id: number; code: string; sequenceInLog: number; status: SlabStatus; thicknessIn: number;
-  widthIn: number; lengthIn: number; priceCents: number; coverThumbUrl: string | null; isThisSlab: boolean;
+  widthIn: number; lengthIn: number; priceCents: number | null; coverThumbUrl: string | null; isThisSlab: boolean;
 };
 
 export type SlabDetail = Omit<SlabListItem, 'species'> & {
@@ -156,15 +166,29 @@ export type SlabDetail = Omit<SlabListItem, 'species'> & {
   photos: SlabPhotoView[];
   moistureReadings: MoistureReadingView[];
   neighbours: LogNeighbour[];
-  priceBreakdown: PriceBreakdownView;
-  /** Estimated weight at the latest reading (or at the mill's air-dry assumption when none). */
+  /** The book-matched set the yard marked this slab into (the one record of "book-matched"), or null. */
+  matchedSet: MatchedSetView | null;
+  /** How the price is worked out; for a sold slab the breakdown recorded at its sale (null when none was). */
+  priceBreakdown: PriceBreakdownView | null;
+  /** Estimated weight at the latest reading, or at the species' typical green MC when there is none. */
   weightLb: number;
   weightAtMcPercent: number;
-  lifting: { peopleNeeded: number; needsEquipment: boolean; message: string };
+  /** Whether the weight uses a reading or the typical green MC, and a sentence saying so. */
+  weightBasis: 'reading' | 'typical-green';
+  weightNote: string;
+  lifting: LiftingAdvice;
+  /** When the slab should reach the air-dry line, from its own readings (or the rule of thumb). */
+  dryingForecast: DryingForecast;
   airDryReadyOn: string | null;
   targetMcPercent: number;
   flatteningPriceCents: number;
 };
+
+/** The price as a buyer reads it: "$1,234.00", "Sold for $1,234.00", or just "Sold". */
+export function priceWords(status: string, priceCents: number | null, format: (cents: number) => string): string {
+  if (!isSold(status)) return priceCents === null ? '' : format(priceCents);
+  return priceCents === null ? 'Sold' : `Sold for ${format(priceCents)}`;
+}
 
 /**
  * A slab's status in Stickerline's words: the one set for buyer pages, the yard desk, the office,
@@ -187,9 +211,6 @@ export const SAWING_METHOD_LABELS: Record<(typeof SAWING_METHODS)[number], strin
   'live-edge-slabbing': 'Live-edge slabbing',
 };
 
-/**
- * Slabs sawn one after the other from the same log open like a book: their facing sides mirror
- * each other (common practice). The one rule for "book-matched" across the shop.
- */
-export const areBookMatched = (a: { logId: number; sequenceInLog: number }, b: { logId: number; sequenceInLog: number }) =>
-  a.logId === b.logId && Math.abs(a.sequenceInLog - b.sequenceInLog) === 1;
+
+/** Kept for older imports: the same words as SLAB_STATUS_LABELS, not a second set. */
+export const STATUS_LABELS = SLAB_STATUS_LABELS;

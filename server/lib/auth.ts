@@ -5,7 +5,8 @@ import { adminAc, userAc } from 'better-auth/plugins/admin/access';
 import type { Db } from '../db/client';
 import * as schema from '../db/schema/index';
 import type { Mailer } from './mail';
-import { passwordResetEmail } from './email-templates';
+import { getLogger } from './logger';
+import { emailChangeEmail, passwordResetEmail } from './email-templates';
 
 export const ROLES = ['buyer', 'seller', 'admin'] as const;
 export type Role = (typeof ROLES)[number];
@@ -45,6 +46,15 @@ export function createAuth({ db, secret, baseURL, trustedOrigins, mailer, signIn
         await mailer.send({ to: user.email, ...passwordResetEmail({ name: user.name, url }) });
       },
     },
+    // A new e-mail counts only once its owner clicks the link sent to it; until then the old one stays.
+    user: { changeEmail: { enabled: true } },
+    emailVerification: {
+      sendOnSignUp: false,
+      expiresIn: 24 * 3600,
+      sendVerificationEmail: async ({ user, url }) => {
+        await mailer.send({ to: user.email, ...emailChangeEmail({ name: user.name, newEmail: user.email, url }) });
+      },
+    },
     plugins: [
       admin({
         roles: { buyer: userAc, seller: userAc, admin: adminAc },
@@ -74,6 +84,8 @@ export function createAuth({ db, secret, baseURL, trustedOrigins, mailer, signIn
       },
     },
     telemetry: { enabled: false },
+    // The library's own warnings go to the process log, scrubbed like every other line.
+    logger: { log: (level, message) => getLogger()[level]({ part: 'auth' }, message) },
   });
 }
 

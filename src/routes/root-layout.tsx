@@ -3,6 +3,7 @@ import { NavLink, Outlet, useNavigation } from 'react-router';
 import type { UnitSystem } from '../../shared/wood/index';
 import { useQuery } from '@tanstack/react-query';
 import { meQuery, preferencesQuery, useSavePreferences, type Role } from '../features/session/api';
+import { useCompareList } from '../features/buyer-lists/api';
 import { UnitsProvider } from '../lib/units';
 import { UnitsSwitch } from '../components/units-switch';
 import { paths } from '../paths';
@@ -12,6 +13,7 @@ type NavItem = { to: string; label: string; roles?: Role[]; visitorOnly?: boolea
 // One list decides who sees which link; the server still checks every call.
 const NAV: NavItem[] = [
   { to: paths.catalogue(), label: 'Slabs' },
+  { to: paths.saved(), label: 'Saved', signedIn: true },
   { to: paths.reservations(), label: 'My holds', signedIn: true },
   { to: paths.orders(), label: 'Orders', signedIn: true },
   { to: paths.yard(), label: 'Yard desk', roles: ['seller', 'admin'] },
@@ -26,14 +28,17 @@ const linkClass = ({ isActive }: { isActive: boolean }) =>
 export function RootLayout() {
   const { data: me } = useQuery(meQuery());
   const navigation = useNavigation();
+  const compare = useCompareList();
   // A signed-in person's units live on their account; a visitor's in this browser.
   const { data: prefs } = useQuery({ ...preferencesQuery(), enabled: !!me });
   const savePrefs = useSavePreferences();
   const { mutate: savePreferences } = savePrefs;
   const saveToAccount = useCallback((units: UnitSystem) => savePreferences({ units }), [savePreferences]);
-  const items = NAV.filter((i) =>
+  const shown = NAV.filter((i) =>
     i.visitorOnly ? !me : i.signedIn ? !!me : i.roles ? !!me && i.roles.includes(me.role) : true,
   );
+  // The compare link appears once something is on the list, right after "Slabs".
+  const items = compare.ids.length ? [shown[0], { to: paths.compare(), label: `Compare (${compare.ids.length})` }, ...shown.slice(1)] : shown;
   return (
     <UnitsProvider accountUnits={me ? prefs?.units ?? null : null} saveToAccount={me ? saveToAccount : undefined}>
     <div className="flex min-h-screen flex-col">

@@ -10,10 +10,12 @@ import type { z } from 'zod';
 import { loadPricingRules } from '../pricing/pricing.service';
 import { withReadingsAndCovers, closeHolds } from '../holds/holds.repo';
 import { quoteSlab } from '../pricing/slab-quote';
+import { getLogger } from '../../lib/logger';
 import { isUniqueViolation } from '../holds/unique-violation';
 import { claimPickupPlace } from '../pickups/pickups.service';
 import { orderEmailInput, orderView } from './order-view';
 import * as repo from './checkout.repo';
+import { moveSlabs } from '../slabs/slab-state';
 
 type CheckoutInput = z.infer<typeof checkoutSchema>;
 export type CheckoutDeps = { db: Db; payments: Payments; publicUrl: string };
@@ -76,7 +78,7 @@ async function prepareOrder(db: Db, buyer: SessionUser, input: CheckoutInput, ke
 async function completeOrder(deps: CheckoutDeps, buyer: SessionUser, prepared: Awaited<ReturnType<typeof prepareOrder>>, chargeId: string, now: Date) {
   const { order, holdIds, slabIds } = prepared;
   await deps.db.transaction(async (tx) => {
-    const sold = await repo.markSlabsSold(tx, slabIds);
+    const sold = await moveSlabs(tx, slabIds, 'sold', 'sale', now);
     if (sold.length !== slabIds.length) throw new AppError(409, 'slab_gone', 'One of these slabs is no longer held for you.');
     await repo.setLineStatus(tx, order.id, 'sold'); // the unique index refuses a second sale of any slab
     await closeHolds(tx, holdIds, 'converted', buyer.id, now);
@@ -138,7 +140,7 @@ export async function checkout(deps: CheckoutDeps, buyer: SessionUser, input: Ch
     await completeOrder(deps, buyer, prepared, chargeId, now);
   } catch (err) {
     // Money taken but the sale could not be recorded: give the money back before reporting.
-    console.error(`[checkout] order ${order.code} could not be completed after charge ${chargeId}; refunding`, err);
+    getLogger().error({ part: 'checkout', order: order.code, chargeId, err }, 'an order could not be completed after its charge; refunding');
     await deps.payments.refund({ chargeId, amountCents: order.totalCents, idempotencyKey: `${chargeKey(key)}-undo`, reason: 'duplicate' });
     await failOrder(deps.db, order, 'The sale could not be completed; the charge was refunded.', chargeId);
     if (err instanceof AppError) throw err;

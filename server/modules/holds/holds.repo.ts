@@ -1,19 +1,7 @@
 import { and, asc, count, desc, eq, inArray, lte } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
+import { vouchedFor } from '../readings/reading-visibility';
 import { holds, moistureReadings, slabPhotos, slabs, species, user } from '../../db/schema/index';
-
-/** Moves a slab listed → held; returns nothing when another request got there first. */
-export async function markSlabHeld(tx: Tx, slabId: number) {
-  const [row] = await tx.update(slabs).set({ status: 'held', updatedAt: new Date() })
-    .where(and(eq(slabs.id, slabId), eq(slabs.status, 'listed'))).returning({ id: slabs.id });
-  return row ?? null;
-}
-
-export async function markSlabsListed(tx: Tx, slabIds: number[]) {
-  if (!slabIds.length) return;
-  await tx.update(slabs).set({ status: 'listed', updatedAt: new Date() })
-    .where(and(inArray(slabs.id, slabIds), eq(slabs.status, 'held')));
-}
 
 export async function findSlab(tx: Tx, slabId: number) {
   const [row] = await tx.select().from(slabs).where(eq(slabs.id, slabId));
@@ -59,7 +47,7 @@ export async function withReadingsAndCovers<T extends { slab: typeof slabs.$infe
   if (!ids.length) return [];
   const [readings, photos] = await Promise.all([
     tx.select({ slabId: moistureReadings.slabId, mc: moistureReadings.mcPercent }).from(moistureReadings)
-      .where(inArray(moistureReadings.slabId, ids)).orderBy(asc(moistureReadings.measuredOn), asc(moistureReadings.id)),
+      .where(and(inArray(moistureReadings.slabId, ids), vouchedFor)).orderBy(asc(moistureReadings.measuredOn), asc(moistureReadings.id)),
     tx.select({ slabId: slabPhotos.slabId, key: slabPhotos.fileKey }).from(slabPhotos)
       .where(inArray(slabPhotos.slabId, ids)).orderBy(desc(slabPhotos.isCover), asc(slabPhotos.position), asc(slabPhotos.id)),
   ]);
@@ -81,4 +69,10 @@ export function findExpiredHolds(tx: Tx, now: Date) {
 
 export function findLogNeighbours(tx: Tx, ids: number[]) {
   return tx.select().from(slabs).where(inArray(slabs.id, ids));
+}
+
+/** Code and species of each slab, for messages about them. */
+export function slabLabels(tx: Tx, ids: number[]) {
+  return tx.select({ code: slabs.code, speciesName: species.name }).from(slabs)
+    .innerJoin(species, eq(species.id, slabs.speciesId)).where(inArray(slabs.id, ids)).orderBy(asc(slabs.code));
 }

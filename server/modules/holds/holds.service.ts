@@ -1,13 +1,14 @@
 import { randomUUID } from 'node:crypto';
 import { formatDateTime } from '../../../shared/dates';
 import { millTimeZone } from '../pickups/slot-calendar';
-import { areBookMatched } from '../../../shared/slabs';
 import type { Db, Tx } from '../../db/client';
 import { AppError, notFound } from '../../lib/errors';
 import { recordAudit } from '../../lib/audit';
 import type { SessionUser } from '../../lib/session';
 import { queueEmail } from '../../lib/outbox';
-import { holdExpiredEmail } from '../../lib/email-templates';
+import { holdExpiredEmail, holdPlacedEmail } from '../../lib/email-templates';
+import { tellWatchersSlabsAreFree } from '../buyer-lists/slab-watches';
+import { millDateTime } from '../pickups/slot-calendar';
 import { photoUrls } from '../../../shared/photos';
 import { DEFAULT_HOLD_HOURS, MAX_ACTIVE_HOLDS_PER_BUYER, type HoldStatus, type HoldView } from '../../../shared/holds';
 import { roundBoardFeet } from '../../../shared/wood/index';
@@ -15,9 +16,12 @@ import { readMillSettings } from '../pricing/pricing.repo';
 import { loadPricingRules } from '../pricing/pricing.service';
 import { isUniqueViolation } from './unique-violation';
 import { quoteSlab } from '../pricing/slab-quote';
+import { assertOneSet } from '../matched-sets/matched-sets.service';
+import { tellAboutRestOfSet } from './set-remainder';
 import * as repo from './holds.repo';
+import { moveSlab, moveSlabs } from '../slabs/slab-state';
 
-export type HoldOptions = { holdHours?: number; now?: Date };
+export type HoldOptions = { holdHours?: number; now?: Date; publicUrl?: string };
 
 const HELD_BY_OTHER = 'Someone else is holding this slab right now.';
 /** When the other buyer's hold runs out, in the mill's words and clock. */
@@ -60,9 +64,14 @@ async function holdSlabs(db: Db, buyer: SessionUser, slabIds: number[], opts: Ho
       const groupId = slabIds.length > 1 ? randomUUID() : null;
       const created = [];
       for (const slabId of slabIds) {
-        if (!(await repo.markSlabHeld(tx, slabId))) throw await refusal(tx, slabId, buyer.id);
+        if (!(await moveSlab(tx, slabId, 'held', 'hold', now))) throw await refusal(tx, slabId, buyer.id);
         created.push(await repo.insertHold(tx, { slabId, buyerId: buyer.id, groupId, expiresAt, createdAt: now }));
       }
+      const held = await repo.slabLabels(tx, slabIds);
+      await queueEmail(tx, {
+        to: buyer.email, kind: 'hold-placed',
+        content: holdPlacedEmail({ name: buyer.name, slabs: held, until: millDateTime(expiresAt), url: `${opts.publicUrl ?? ''}/reservations` }),
+      });
       return created;
     });
   } catch (err) {
@@ -76,16 +85,11 @@ export async function placeHold(db: Db, buyer: SessionUser, slabId: number, opts
   return hold;
 }
 
-/** A book-matched pair: same log, neighbouring sequence numbers, both for sale. */
+/** Slabs of one book-matched set as the yard marked it (at least two of its members), held together. */
 export async function placeMatchedSet(db: Db, buyer: SessionUser, slabIds: number[], opts: HoldOptions = {}) {
   const found = await repo.findLogNeighbours(db, slabIds);
   if (found.length !== slabIds.length) throw notFound('One of those slabs');
-  const [a, b] = found;
-  if (!areBookMatched(a, b)) {
-    throw new AppError(400, 'not_matched', 'Those slabs are not a book-matched pair: they must be neighbours from the same log.', {
-      slabIds: ['Pick two neighbouring slabs from the same log'],
-    });
-  }
+  await assertOneSet(db, slabIds);
   return holdSlabs(db, buyer, slabIds, opts);
 }
 
@@ -107,7 +111,7 @@ export async function listHolds(db: Db, buyerId: string, now = new Date()): Prom
 }
 
 /** The owner gives a hold up (or an admin lifts it): the slab goes back on sale. */
-export async function releaseHold(db: Db, actor: SessionUser, holdId: number) {
+export async function releaseHold(db: Db, actor: SessionUser, holdId: number, { publicUrl = '' } = {}) {
   return db.transaction(async (tx) => {
     const hold = await repo.findHold(tx, holdId);
     const isAdmin = actor.role === 'admin';
@@ -115,10 +119,12 @@ export async function releaseHold(db: Db, actor: SessionUser, holdId: number) {
     if (hold.status !== 'active') throw new AppError(409, 'hold_closed', 'That hold has already ended.');
     const [closed] = await repo.closeHolds(tx, [hold.id], 'released', actor.id);
     if (!closed) throw new AppError(409, 'hold_closed', 'That hold has already ended.');
-    await repo.markSlabsListed(tx, [hold.slabId]);
+    await moveSlabs(tx, [hold.slabId], 'listed', 'hold-ended');
+    await tellWatchersSlabsAreFree(tx, [hold.slabId], { publicUrl });
     if (hold.buyerId !== actor.id) {
       await recordAudit(tx, { actor, action: 'hold.release', entityType: 'hold', entityId: hold.id, before: { status: 'active' }, after: { status: 'released' } });
     }
+    await tellAboutRestOfSet(tx, [closed], hold.buyerId === actor.id ? 'released-by-buyer' : 'released-by-office', actor, { publicUrl });
     return closed;
   });
 }
@@ -131,7 +137,9 @@ export async function releaseExpiredHolds(db: Db, { now = new Date(), publicUrl 
     const closed = await repo.closeHolds(tx, expired.map((e) => e.hold.id), 'expired', 'system', now);
     const closedIds = new Set(closed.map((h) => h.id));
     const done = expired.filter((e) => closedIds.has(e.hold.id));
-    await repo.markSlabsListed(tx, done.map((e) => e.hold.slabId));
+    await moveSlabs(tx, done.map((e) => e.hold.slabId), 'listed', 'hold-ended', now);
+    await tellAboutRestOfSet(tx, closed, 'expired', null, { publicUrl });
+    await tellWatchersSlabsAreFree(tx, done.map((e) => e.hold.slabId), { publicUrl, now });
     const byBuyer = new Map<string, typeof done>();
     for (const e of done) byBuyer.set(e.buyerEmail, [...(byBuyer.get(e.buyerEmail) ?? []), e]);
     for (const [email, items] of byBuyer) {

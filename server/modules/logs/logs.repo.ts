@@ -1,4 +1,5 @@
 import { asc, desc, eq, like, sql } from 'drizzle-orm';
+import { yardPriceCents } from '../pricing/sold-price';
 import type { Tx } from '../../db/client';
 import { logs, slabs, species } from '../../db/schema/index';
 
@@ -19,8 +20,17 @@ export async function findLog(db: Tx, id: number) {
 export function findLogSlabs(db: Tx, logId: number) {
   return db.select({
     id: slabs.id, code: slabs.code, sequenceInLog: slabs.sequenceInLog, status: slabs.status, thicknessIn: slabs.thicknessIn,
-    widthIn: slabs.widthIn, lengthIn: slabs.lengthIn, boardFeet: slabs.boardFeet, priceCents: slabs.priceCents, yardStack: slabs.yardStack,
+    widthIn: slabs.widthIn, lengthIn: slabs.lengthIn, boardFeet: slabs.boardFeet, priceCents: yardPriceCents, yardStack: slabs.yardStack,
   }).from(slabs).where(eq(slabs.logId, logId)).orderBy(asc(slabs.sequenceInLog));
+}
+
+/** The widest station and the longest slab recorded from a log (nulls when it has none). */
+export async function slabExtremes(db: Tx, logId: number) {
+  const [row] = await db.select({
+    widestIn: sql<number | null>`max((select max(w::float8) from jsonb_array_elements_text(${slabs.widthsIn}) w))`,
+    longestIn: sql<number | null>`max(${slabs.lengthIn})`,
+  }).from(slabs).where(eq(slabs.logId, logId));
+  return { widestIn: row?.widestIn === null || row?.widestIn === undefined ? null : Number(row.widestIn), longestIn: row?.longestIn == null ? null : Number(row.longestIn) };
 }
 
 export async function findSpeciesBySlug(db: Tx, slug: string) {

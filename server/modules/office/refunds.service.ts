@@ -10,6 +10,8 @@ import { formatCents } from '../../../shared/wood/index';
 import type { CreateRefundInput } from '../../../shared/office';
 import * as orders from './orders.repo';
 import * as repo from './refunds.repo';
+import { moveSlabs } from '../slabs/slab-state';
+import { getLogger } from '../../lib/logger';
 import { getOrderDetail, toPaymentView } from './orders.service';
 
 export type RefundDeps = { db: Db; payments: Payments; mailer: Mailer; publicUrl?: string; trustedOrigins?: string[] };
@@ -78,7 +80,8 @@ export async function issueRefund(deps: RefundDeps, actor: SessionUser | null, o
     const row = await repo.settleRefund(tx, payment.id, { status: 'succeeded', providerId: providerRefundId });
     const lines = (await orders.linesOf(tx, [orderId])).map((l) => l.line).filter((l) => r.slabIds.includes(l.slabId) && l.status === 'sold');
     await orders.setLinesStatus(tx, lines.map((l) => l.id), 'refunded');
-    await orders.setSlabStatus(tx, lines.map((l) => l.slabId), r.returnSlabsTo);
+    // The money has gone back already: a slab that is somehow elsewhere is left where it is, never blocks the record.
+    await moveSlabs(tx, lines.map((l) => l.slabId), r.returnSlabsTo, 'refund');
     const refundedCents = current.refundedCents + r.amountCents;
     const status = opts.keepStatus ?? (refundedCents >= current.totalCents ? 'refunded' : current.status);
     await orders.updateOrder(tx, orderId, { refundedCents, status });
@@ -103,5 +106,5 @@ export async function issueRefund(deps: RefundDeps, actor: SessionUser | null, o
 
 /** Sends the queued e-mail now; if the mail server is down the row stays queued for the next try. */
 export async function sendQueuedMail({ db, mailer }: { db: Db; mailer: Mailer }) {
-  await flushOutbox(db, mailer).catch((err) => console.warn('[office] mail flush failed', (err as Error).message));
+  await flushOutbox(db, mailer).catch((err) => getLogger().warn({ part: 'office', reason: (err as Error).message }, 'sending queued e-mail failed'));
 }

@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '../../lib/api-client';
-import type { CreateLogInput, LogDetail, LogSummary, UpdateLog } from '../../../shared/logs';
+import type { LogMatchedSets, MatchedSetView } from '../../../shared/matched-sets';
+import type { CreateLogInput, LogDetail, LogSummary, NextLogCode, UpdateLog } from '../../../shared/logs';
 import type {
   BulkResult, BulkSlabAction, CreateFigureKind, CreateSlab, FigureKind, UpdateSlab, YardSlabDetail, YardSlabPage,
 } from '../../../shared/slab-input';
@@ -18,12 +19,36 @@ export const yardKeys = {
   figureKinds: () => [...yardKeys.all, 'figure-kinds'] as const,
   species: () => [...yardKeys.all, 'species'] as const,
   shopAddress: () => [...yardKeys.all, 'shop-address'] as const,
+  matchedSets: (logId: number) => [...yardKeys.all, 'logs', logId, 'matched-sets'] as const,
 };
+
+export const logMatchedSetsQuery = (logId: number) =>
+  queryOptions({ queryKey: yardKeys.matchedSets(logId), queryFn: () => apiFetch<LogMatchedSets>(`/api/logs/${logId}/matched-sets`) });
+
+/** Marking or unmarking a set changes the log page and every public slab page of the log. */
+export function useMatchedSetChange(logId: number) {
+  const qc = useQueryClient();
+  const refresh = () => { void qc.invalidateQueries({ queryKey: yardKeys.matchedSets(logId) }); void qc.invalidateQueries({ queryKey: ['slabs'] }); };
+  return {
+    mark: useMutation({ mutationFn: (slabIds: number[]) => apiFetch<MatchedSetView>('/api/matched-sets', { method: 'POST', body: { slabIds } }), onSuccess: refresh }),
+    unmark: useMutation({ mutationFn: (setId: number) => apiFetch<{ id: number }>(`/api/matched-sets/${setId}`, { method: 'DELETE' }), onSuccess: refresh }),
+  };
+}
 
 export type ShopAddress = { url: string; phonesCanReach: boolean; suggestions: string[] };
 
 export const shopAddressQuery = () =>
   queryOptions({ queryKey: yardKeys.shopAddress(), queryFn: () => apiFetch<ShopAddress>('/api/yard/shop-address'), staleTime: Infinity });
+
+/** The code a new log would get now, and today's date at the mill (for the form's date checks). Under the logs key, so saving a log refreshes it. */
+export const nextLogCodeQuery = (felledOn: string | null | undefined) => {
+  const day = felledOn && /^\d{4}-\d{2}-\d{2}$/.test(felledOn) ? felledOn : '';
+  return queryOptions({
+    queryKey: [...yardKeys.logs(), 'next-code', day] as const,
+    queryFn: () => apiFetch<NextLogCode>(`/api/logs/next-code${day ? `?felledOn=${day}` : ''}`),
+    placeholderData: keepPreviousData,
+  });
+};
 
 export const logListQuery = () =>
   queryOptions({ queryKey: yardKeys.logs(), queryFn: async () => (await apiFetch<{ items: LogSummary[] }>('/api/logs')).items });

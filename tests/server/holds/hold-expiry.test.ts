@@ -27,10 +27,10 @@ describe('expired holds', () => {
     expect(h.status).toBe('expired');
     expect((await t.db.select().from(slabs).where(eq(slabs.id, slab.id)))[0].status).toBe('listed');
     const queued = await t.db.select().from(emailOutbox).where(eq(emailOutbox.toAddress, buyer.email));
-    expect(queued.map((q) => q.kind)).toEqual(['hold-expired']);
+    expect(queued.map((q) => q.kind)).toEqual(['hold-placed', 'hold-expired']);
 
     await flushOutbox(t.db, t.mailer);
-    const mail = await waitForMail(buyer.email, (m) => m.subject.includes(slab.code));
+    const mail = await waitForMail(buyer.email, (m) => m.subject.includes(slab.code) && m.subject.includes('ended'));
     expect(mail.text).toContain('Wren Callow');
     expect(mail.text).toContain('back on sale');
   });
@@ -39,13 +39,13 @@ describe('expired holds', () => {
     const slab = await slabRow(t.db, await logRow(t.db, 'black-walnut'));
     const buyer = await t.signedInAs('buyer');
     const { body } = await hold(buyer.agent, slab.id);
-    await t.db.update(holds).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(holds.id, body.hold.id));
+    await t.db.update(holds).set({ createdAt: new Date(Date.now() - 3_600_000), expiresAt: new Date(Date.now() - 1000) }).where(eq(holds.id, body.hold.id));
     expect((await buyer.agent.get('/api/holds')).body.holds).toEqual([]);
   });
 
   it('a failed send is kept and retried later, not lost', async () => {
     await t.db.insert(emailOutbox).values({ toAddress: 'nobody@example.test', subject: 's', html: '<p>h</p>', text: 't', kind: 'test' });
-    const broken = { send: async () => { throw new Error('SMTP down'); }, close: () => undefined };
+    const broken = { send: async () => { throw new Error('SMTP down'); }, verify: async () => { throw new Error('SMTP down'); }, close: () => undefined };
     const result = await flushOutbox(t.db, broken);
     expect(result.failed).toBeGreaterThanOrEqual(1);
     const [row] = await t.db.select().from(emailOutbox).where(eq(emailOutbox.toAddress, 'nobody@example.test'));

@@ -64,7 +64,7 @@ describe('equilibriumMoistureContent (Wood Handbook Eq. 4-5)', () => {
 
 describe('moistureContentPercent (ASTM D4442, oven-dry basis)', () => {
   it('reads 1,100 g wet over 1,000 g oven-dry as 10.0 %', () => {
-    // ASTM D4442 oven-dry formula, REFERENCES example (read), tolerance 1e-9
+    // ASTM D4442 oven-dry formula: (1100 − 1000) / 1000 × 100 = 10 %, tolerance 1e-9
     expect(moistureContentPercent({ wetMass: 1100, ovenDryMass: 1000 })).toBeCloseTo(10, 9);
   });
 
@@ -96,5 +96,17 @@ describe('maxMoistureContentPercent', () => {
     const { maxMoistureContentPercent } = await import('../../../shared/wood');
     // Same equation, Gb = 0.60 (Wood Handbook ch. 5): 100 × 0.94 / 0.924 = 101.7 %.
     expect(maxMoistureContentPercent(0.6)).toBeCloseTo(101.7, 1);
+  });
+});
+
+describe('moisture content upper limits', () => {
+  it('refuses a moisture content more water than any wood can hold', async () => {
+    const { ABSOLUTE_MAX_MOISTURE_CONTENT_PERCENT, dryingStateFor, maxMoistureContentPercent } = await import('../../../shared/wood');
+    // maximum MC equation (Wood Handbook FPL-GTR-190 ch. 4) at G_b 0.10, lighter than any commercial timber: about 935 %
+    expect(ABSOLUTE_MAX_MOISTURE_CONTENT_PERCENT).toBeCloseTo(maxMoistureContentPercent(0.1), 9);
+    expect(ABSOLUTE_MAX_MOISTURE_CONTENT_PERCENT).toBeCloseTo(935.1, 1);
+    expect(() => moistureContentPercent({ wetMass: 1e9, ovenDryMass: 1 })).toThrow(/wetMass/);
+    expect(() => moistureContentPercent({ wetMass: 1e300, ovenDryMass: 1e-300 })).toThrow(WoodMathError);
+    expect(() => dryingStateFor({ mcPercent: 5000, targetMcPercent: 8 })).toThrow(/mcPercent/);
   });
 });

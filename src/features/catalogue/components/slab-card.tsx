@@ -1,6 +1,6 @@
 import { Link } from 'react-router';
 import { paths } from '../../../paths';
-import { SLAB_STATUS_LABELS, LIVE_EDGE_LABELS, type SlabListItem } from '../../../../shared/slabs';
+import { STATUS_LABELS, LIVE_EDGE_LABELS, priceWords, type SlabListItem } from '../../../../shared/slabs';
 import { formatCents, formatPercent, MM_PER_INCH } from '../../../../shared/wood/index';
 import { useMeasures } from '../../../lib/units';
 import { Tag } from '../../../components/ui/tag';
@@ -31,11 +31,11 @@ export function SlabCard({ slab }: { slab: SlabListItem }) {
           <p className="text-sm text-ink-soft">{LIVE_EDGE_LABELS[slab.liveEdge]}{slab.figures.length ? ` · ${slab.figures.join(', ')}` : ''}</p>
           <div className="mt-auto flex items-end justify-between gap-2 pt-2">
             <div>
-              <p className="text-xl font-bold text-accent-strong">{formatCents(slab.priceCents)}</p>
+              <p className="text-xl font-bold text-accent-strong">{priceWords(slab.status, slab.priceCents, formatCents)}</p>
               <p className="text-sm text-ink-soft">{m.boardFeet(slab.boardFeet)}</p>
             </div>
             <div className="flex flex-col items-end gap-1">
-              <Tag tone={forSale ? 'moss' : slab.status === 'held' ? 'caution' : 'neutral'}>{SLAB_STATUS_LABELS[slab.status]}</Tag>
+              <Tag tone={forSale ? 'moss' : slab.status === 'held' ? 'caution' : 'neutral'}>{STATUS_LABELS[slab.status]}</Tag>
               {slab.moisturePercent !== null && <span className="text-sm text-ink-soft">{formatPercent(slab.moisturePercent)} MC</span>}
             </div>
           </div>

@@ -6,6 +6,7 @@ import { Tag } from '../../../components/ui/tag';
 import { friendlyMessage } from '../../../lib/api-client';
 import { METER_KIND_LABELS } from '../../../../shared/readings';
 import { slabReadingsQuery, useDeleteReading } from '../api';
+import { DryingForecastNote } from '../../../components/wood/drying-forecast';
 import { DryingCurve } from './drying-curve';
 import { ReadingForm } from './reading-form';
 import { dryingLabel } from './drying-words';
@@ -19,7 +20,7 @@ export function SlabReadingsPanel({ slabId }: { slabId: number }) {
 
   if (q.isPending) return <p className="text-ink-soft">Loading readings…</p>;
   if (q.isError) return <Notice tone="danger" role="alert">{friendlyMessage(q.error)}</Notice>;
-  const { items, targetMcPercent, airDryReadyOn, slab } = q.data;
+  const { items, targetMcPercent, airDryReadyOn, slab, dryingForecast } = q.data;
   const newestFirst = [...items].reverse();
 
   return (
@@ -29,7 +30,8 @@ export function SlabReadingsPanel({ slabId }: { slabId: number }) {
         <Tag tone="accent">{dryingLabel(slab.dryingState)}</Tag>
         <span className="text-sm text-ink-soft">mill target {targetMcPercent} %</span>
       </div>
-      <DryingCurve readings={items} targetMcPercent={targetMcPercent} airDryReadyOn={airDryReadyOn} />
+      <DryingCurve readings={items.filter((r) => r.review !== 'unconfirmed')} targetMcPercent={targetMcPercent} airDryReadyOn={airDryReadyOn} />
+      <DryingForecastNote forecast={dryingForecast} heading="Air-dry forecast" />
       <ReadingForm slabId={slabId} />
       {remove.isError && <Notice tone="danger" role="alert">{friendlyMessage(remove.error)}</Notice>}
       {newestFirst.length > 0 && (
@@ -43,7 +45,11 @@ export function SlabReadingsPanel({ slabId }: { slabId: number }) {
               {newestFirst.map((r) => (
                 <tr key={r.id} className="border-b border-line/60">
                   <td className="py-2 pr-3 whitespace-nowrap">{r.measuredOn}</td>
-                  <td className="pr-3 font-semibold">{r.mcPercent} %</td>
+                  <td className="pr-3">
+                    <span className="font-semibold">{r.mcPercent} %</span>
+                    {r.review === 'confirmed' && <span className="ml-1 text-ink-soft">(confirmed jump)</span>}
+                    {r.review === 'unconfirmed' && <span className="ml-1"><Tag tone="danger">Not shown to buyers</Tag></span>}
+                  </td>
                   <td className="pr-3">{METER_KIND_LABELS[r.meterKind] ?? r.meterKind}</td>
                   <td className="pr-3">{r.location || '—'}{r.depthIn !== null && <>, <Length inches={r.depthIn} /> deep</>}</td>
                   <td className="py-1 text-right">
