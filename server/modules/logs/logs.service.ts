@@ -1,6 +1,7 @@
 import type { Db } from '../../db/client';
 import { AppError, notFound, validationError } from '../../lib/errors';
 import type { SessionUser } from '../../lib/session';
+import { recordAudit } from '../../lib/audit';
 import { createLogSchema, updateLogSchema, type LogDetail, type LogSummary } from '../../../shared/logs';
 import * as repo from './logs.repo';
 import { readMillSettings } from '../pricing/pricing.repo';
@@ -51,7 +52,7 @@ async function speciesIdFor(db: Db, slug: string) {
 const codeTaken = (code: string) =>
   new AppError(409, 'conflict', `Log code ${code} is already used.`, { code: [`${code} is already used by another log`] });
 
-export async function createLog(db: Db, raw: unknown, _actor: SessionUser): Promise<LogDetail> {
+export async function createLog(db: Db, raw: unknown, actor: SessionUser): Promise<LogDetail> {
   const input = createLogSchema.parse(raw);
   const speciesId = await speciesIdFor(db, input.speciesSlug);
   if (input.code && (await repo.logCodeTaken(db, input.code))) throw codeTaken(input.code);
@@ -60,9 +61,13 @@ export async function createLog(db: Db, raw: unknown, _actor: SessionUser): Prom
   for (let attempt = 0; ; attempt++) {
     const code = input.code ?? (await nextLogCode(db, input.felledOn));
     try {
-      const row = await repo.insertLog(db, {
-        ...rest, code, speciesId, originNote: rest.originNote ?? '', notes: rest.notes ?? '',
-        felledOn: rest.felledOn ?? null, milledOn: rest.milledOn ?? null,
+      const row = await db.transaction(async (tx) => {
+        const inserted = await repo.insertLog(tx, {
+          ...rest, code, speciesId, originNote: rest.originNote ?? '', notes: rest.notes ?? '',
+          felledOn: rest.felledOn ?? null, milledOn: rest.milledOn ?? null,
+        });
+        await recordAudit(tx, { actor, action: 'log.create', entityType: 'log', entityId: inserted.id, before: null, after: { code: inserted.code, speciesSlug: input.speciesSlug } });
+        return inserted;
       });
       return getLog(db, row.id);
     } catch (err) {
@@ -72,7 +77,7 @@ export async function createLog(db: Db, raw: unknown, _actor: SessionUser): Prom
   }
 }
 
-export async function updateLog(db: Db, id: number, raw: unknown): Promise<LogDetail> {
+export async function updateLog(db: Db, id: number, raw: unknown, actor: SessionUser): Promise<LogDetail> {
   const input = updateLogSchema.parse(raw);
   const existing = await repo.findLog(db, id);
   if (!existing) throw notFound('That log');
@@ -97,6 +102,12 @@ export async function updateLog(db: Db, id: number, raw: unknown): Promise<LogDe
     const other = await repo.logCodeTaken(db, input.code);
     if (other && other !== id) throw codeTaken(input.code);
   }
-  if (Object.keys(values).length) await repo.updateLog(db, id, values);
+  if (Object.keys(values).length) {
+    await db.transaction(async (tx) => {
+      await repo.updateLog(tx, id, values);
+      const changed = Object.keys(input).filter((k) => (input as Record<string, unknown>)[k] !== (existing.log as Record<string, unknown>)[k]);
+      await recordAudit(tx, { actor, action: 'log.update', entityType: 'log', entityId: id, before: null, after: { fields: changed } });
+    });
+  }
   return getLog(db, id);
 }
