@@ -4,7 +4,7 @@ import {
 import { logs } from './logs';
 import { species } from './species';
 
-export type SlabDefect = { kind: string; note: string };
+export type SlabDefect = { kind: string; note: string; fromButtIn?: number | null; face?: string | null };
 
 export const slabs = pgTable('slabs', {
   id: serial('id').primaryKey(),

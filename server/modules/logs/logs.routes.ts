@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import type { Db } from '../../db/client';
 import { requireRole } from '../../lib/session';
-import { createLog, getLog, listLogs, parseLogId, updateLog } from './logs.service';
+import { createLog, deleteLog, getLog, listLogs, parseLogId, updateLog } from './logs.service';
 
 /** The mill's log book: staff only. */
 export function logRoutes({ db }: { db: Db }) {
@@ -18,6 +18,9 @@ export function logRoutes({ db }: { db: Db }) {
   });
   router.patch('/logs/:id', staff, async (req, res) => {
     res.json(await updateLog(db, parseLogId(String(req.params.id)), req.body));
+  });
+  router.delete('/logs/:id', staff, async (req, res) => {
+    res.json(await deleteLog(db, req.user!, parseLogId(String(req.params.id))));
   });
   return router;
 }

@@ -1,6 +1,7 @@
 import type { Db } from '../../db/client';
 import { AppError, notFound, validationError } from '../../lib/errors';
 import type { SessionUser } from '../../lib/session';
+import { recordAudit } from '../../lib/audit';
 import { createLogSchema, updateLogSchema, type LogDetail, type LogSummary } from '../../../shared/logs';
 import * as repo from './logs.repo';
 import { readMillSettings } from '../pricing/pricing.repo';
@@ -99,4 +100,23 @@ export async function updateLog(db: Db, id: number, raw: unknown): Promise<LogDe
   }
   if (Object.keys(values).length) await repo.updateLog(db, id, values);
   return getLog(db, id);
+}
+
+/** A log recorded by mistake can go while no slab has been recorded from it; the audit log keeps it. */
+export async function deleteLog(db: Db, actor: SessionUser, id: number) {
+  return db.transaction(async (tx) => {
+    const row = await repo.findLog(tx, id);
+    if (!row) throw notFound('That log');
+    const n = Number(row.slabCount);
+    if (n > 0) {
+      throw new AppError(409, 'not_deletable',
+        `Log ${row.log.code} cannot be deleted: ${n === 1 ? 'a slab was' : `${n} slabs were`} recorded from it. Delete ${n === 1 ? 'that slab' : 'those slabs'} first (only slabs never put on sale can be deleted).`);
+    }
+    await repo.deleteLogRow(tx, id);
+    await recordAudit(tx, {
+      actor, action: 'log.delete', entityType: 'log', entityId: id, after: null,
+      before: { code: row.log.code, species: row.speciesSlug, lengthIn: row.log.lengthIn, felledOn: row.log.felledOn, milledOn: row.log.milledOn },
+    });
+    return { deleted: row.log.code };
+  });
 }
