@@ -28,6 +28,7 @@ import { millRulesRoutes } from './modules/mill-rules/mill-rules.routes';
 import { readingRoutes } from './modules/readings/readings.routes';
 import { buyerListRoutes } from './modules/buyer-lists/buyer-lists.routes';
 import { shopAddressRoutes } from './modules/shop-address/shop-address.routes';
+import { matchedSetRoutes } from './modules/matched-sets/matched-sets.routes';
 
 export type AppDeps = {
   db: Db;
@@ -101,6 +102,7 @@ export function createApp(deps: AppDeps) {
   api.use(logRoutes(deps));
   api.use(yardSlabRoutes(deps));
   api.use(readingRoutes(deps));
+  api.use(matchedSetRoutes(deps));
   api.use(officeRoutes(deps));
   api.use(millRulesRoutes(deps));
   api.use(shopAddressRoutes({ publicUrl: deps.publicUrl ?? deps.trustedOrigins?.[0] ?? 'http://localhost:3000' }));

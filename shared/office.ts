@@ -116,9 +116,16 @@ export type ActiveHold = {
 // --- the mill's numbers ------------------------------------------------------------------------
 export type MonthlySpeciesSales = { month: string; speciesName: string; boardFeet: number; revenueCents: number; slabs: number };
 export type SlabStatusCount = { status: string; count: number };
+export type DryingStockForecast = {
+  id: number; code: string; speciesName: string; thicknessIn: number; moisturePercent: number | null;
+  expectedOn: string | null; earliestOn: string | null; latestOn: string | null; basis: string;
+};
+
 export type MillNumbers = {
   sales: MonthlySpeciesSales[];
   statusCounts: SlabStatusCount[];
   averageDaysMilledToSold: number | null;
   soldSlabsWithMillDate: number;
+  /** Slabs still drying, soonest expected air-dry date first (at most 200). */
+  dryingStock: DryingStockForecast[];
 };

@@ -1,3 +1,4 @@
+import type { DryingForecast } from './wood/index';
 import { z } from 'zod';
 import { parseInches, WoodMathError } from './wood/index';
 import { LIVE_EDGE, SLAB_STATUSES, type SlabStatus } from './slabs';
@@ -196,6 +197,7 @@ export type BulkResult = { id: number; ok: boolean; status?: SlabStatus; code?: 
 export const YARD_SORTS = [
   'code', 'species', 'log', 'sequenceInLog', 'status', 'dryingState', 'thicknessIn', 'widthIn', 'lengthIn',
   'boardFeet', 'priceCents', 'yardStack', 'moisturePercent', 'photoCount', 'createdAt', 'updatedAt', 'listedAt',
+  'airDryExpectedOn',
 ] as const;
 export type YardSort = (typeof YARD_SORTS)[number];
 
@@ -228,7 +230,10 @@ export type YardSlabRow = {
   yardStack: string; yardPosition: string; liveEdge: string; figures: string[];
   moisturePercent: number | null; lastReadingOn: string | null; photoCount: number;
   createdAt: string; updatedAt: string; listedAt: string | null;
+  /** When the slab should reach the air-dry line, from its readings (or the rule of thumb); null until worked out. */
+  airDry: YardDryingForecast | null;
 };
+export type YardDryingForecast = Pick<DryingForecast, 'expectedOn' | 'earliestOn' | 'latestOn' | 'basis' | 'method'>;
 export type YardSlabPage = { items: YardSlabRow[]; total: number; page: number; pageSize: number; counts: Record<SlabStatus, number> };
 
 /** A slab as the staff form edits it. */

@@ -1,4 +1,5 @@
-import { requireFinite, WoodMathError } from './errors';
+import { requireFinite, requireInRange, WoodMathError } from './errors';
+import { WOOD_LIMITS } from './limits';
 import { roundHalfAwayFromZero } from './rounding';
 import { CUBIC_INCHES_PER_BOARD_FOOT } from './board-feet';
 
@@ -25,7 +26,7 @@ function gcd(a: number, b: number): number {
 
 /** Inches to the nearest 1/16, reduced: 1.75 → "1 3/4", 0.1875 → "3/16", 2 → "2". */
 export function toSixteenths(inches: number): string {
-  requireFinite(inches, 'inches');
+  requireInRange(inches, 'inches', -WOOD_LIMITS.anyInches, WOOD_LIMITS.anyInches);
   const sixteenths = roundHalfAwayFromZero(Math.abs(inches) * 16, 0);
   if (sixteenths === 0) return '0';
   const sign = inches < 0 ? '-' : '';
@@ -51,7 +52,7 @@ export function plainNumber(value: number, decimals: number): string {
 
 /** A length: "26 5/16 in", or "668 mm" / "244 cm" in metric. */
 export function formatLength(inches: number, units: UnitSystem = 'imperial'): string {
-  requireFinite(inches, 'inches');
+  requireInRange(inches, 'inches', -WOOD_LIMITS.anyInches, WOOD_LIMITS.anyInches);
   if (units === 'imperial') return `${toSixteenths(inches)} in`;
   const mm = inches * MM_PER_INCH;
   return Math.abs(mm) >= 1000 ? `${plainNumber(mm / 10, 0)} cm` : `${plainNumber(mm, 0)} mm`;
@@ -132,6 +133,14 @@ const unreadable = (text: string, extra = EXAMPLES) => new WoodMathError(`"${tex
  * top-heavy fraction is refused as a likely slip. Returns inches; throws WoodMathError otherwise.
  */
 export function parseInches(text: string, options: ParseInchesOptions = {}): number {
+  const inches = readInches(text, options);
+  if (!Number.isFinite(inches) || Math.abs(inches) > WOOD_LIMITS.anyInches) {
+    throw new WoodMathError(`"${String(text).trim().slice(0, 40)}" is more than ${WOOD_LIMITS.anyInches} in.`, 'inches');
+  }
+  return inches;
+}
+
+function readInches(text: string, options: ParseInchesOptions): number {
   if (typeof text !== 'string' || text.trim() === '') throw new WoodMathError('Enter a size in inches.', 'inches');
   let s = text.trim().replace(/\s+/g, ' ').replace(/\u2044|\u2215/g, '/');
   s = s.replace(/\s*(?:"|″|”|''|in\.?|inch|inches)$/i, '').trim();
@@ -180,6 +189,7 @@ export function inchesForInput(inches: number | null | undefined): string {
 export function formatCents(cents: number): string {
   requireFinite(cents, 'cents');
   if (!Number.isInteger(cents)) throw new WoodMathError(`cents must be a whole number (got ${cents})`, 'cents');
+  if (!Number.isSafeInteger(cents)) throw new WoodMathError(`cents is too large to show exactly (got ${cents})`, 'cents');
   const abs = Math.abs(cents);
   const dollarsPart = groupThousands(Math.floor(abs / 100).toString());
   const centsPart = String(abs % 100).padStart(2, '0');
@@ -209,6 +219,8 @@ export function parseDollarsToCents(text: string): number {
   const dollars = Number((match[1] ?? '0').replace(/,/g, ''));
   const cents = Number((match[2] ?? '').padEnd(2, '0'));
   const total = dollars * 100 + cents;
-  if (!Number.isSafeInteger(total)) throw new WoodMathError(`"${text.trim()}" is too large.`, 'dollars');
+  if (!Number.isSafeInteger(total) || total > WOOD_LIMITS.priceCents) {
+    throw new WoodMathError(`"${text.trim()}" is too large (at most ${formatCents(WOOD_LIMITS.priceCents)}).`, 'dollars');
+  }
   return total;
 }

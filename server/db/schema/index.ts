@@ -11,4 +11,5 @@ export * from './pickups';
 export * from './orders';
 export * from './audit-log';
 export * from './email-outbox';
+export * from './matched-sets';
 export * from './buyer-lists';

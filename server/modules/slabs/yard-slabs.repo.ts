@@ -14,7 +14,7 @@ const photoCount = sql<number>`(select count(*)::int from ${slabPhotos} where ${
 
 const rowColumns = {
   slab: slabs, speciesSlug: species.slug, speciesName: species.name, rate: species.ratePerBoardFootCents,
-  logCode: logs.code, moisturePercent, lastReadingOn, photoCount,
+  logCode: logs.code, milledOn: logs.milledOn, moisturePercent, lastReadingOn, photoCount,
 };
 
 const selectRows = (db: Tx) =>
@@ -49,7 +49,16 @@ const sortColumn: Record<YardSort, SQL> = {
   widthIn: sql`${slabs.widthIn}`, lengthIn: sql`${slabs.lengthIn}`, boardFeet: sql`${slabs.boardFeet}`,
   priceCents: sql`${slabs.priceCents}`, yardStack: sql`${slabs.yardStack}`, moisturePercent,
   photoCount, createdAt: sql`${slabs.createdAt}`, updatedAt: sql`${slabs.updatedAt}`, listedAt: sql`${slabs.listedAt}`,
+  // worked out from each slab's readings in the service, which sorts on it; the database keeps code order
+  airDryExpectedOn: sql`${slabs.code}`,
 };
+
+/** The readings someone stands behind (not unconfirmed ones) of the given slabs, oldest first, for the drying forecasts. */
+export function readingsForSlabs(db: Tx, ids: number[]) {
+  if (!ids.length) return Promise.resolve([]);
+  return db.select({ slabId: moistureReadings.slabId, measuredOn: moistureReadings.measuredOn, mcPercent: moistureReadings.mcPercent })
+    .from(moistureReadings).where(and(inArray(moistureReadings.slabId, ids), vouchedFor)).orderBy(asc(moistureReadings.measuredOn), asc(moistureReadings.id));
+}
 
 export async function findYardPage(db: Tx, q: YardSlabQuery, { all = false } = {}) {
   const where = whereFor(q);

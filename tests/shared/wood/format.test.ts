@@ -145,3 +145,20 @@ describe('money', () => {
     }));
   });
 });
+
+describe('format limits', () => {
+  it('refuses figures too large to show honestly', () => {
+    expect(() => toSixteenths(1e300)).toThrow(WoodMathError);
+    expect(() => formatInches(1e7)).toThrow(/inches/);
+    expect(() => parseInches('9'.repeat(400))).toThrow(WoodMathError);
+    expect(() => formatCents(2 ** 60)).toThrow(/cents/);
+  });
+});
+
+describe('typed dollar amounts', () => {
+  it('refuses an amount above the $100 million cap', () => {
+    expect(parseDollarsToCents('100,000,000.00')).toBe(10_000_000_000);
+    expect(() => parseDollarsToCents('100,000,000.01')).toThrow(/too large/);
+    expect(() => parseDollarsToCents('90071992547409.93')).toThrow(WoodMathError);
+  });
+});

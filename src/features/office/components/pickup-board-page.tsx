@@ -5,8 +5,9 @@ import { Notice } from '../../../components/ui/notice';
 import { Tag } from '../../../components/ui/tag';
 import { buttonClass } from '../../../components/ui/button';
 import { paths } from '../../../paths';
-import { EQUIPMENT_ABOVE_LB } from '../../../../shared/wood/index';
+import { lifting, WOOD_LIMITS } from '../../../../shared/wood/index';
 import { Length, Weight } from '../../../lib/units';
+import { STAFF_DUST_NOISE_CAUTION } from '../../../../shared/safety';
 import { formatWindow, WEEKDAY_NAMES } from '../../../../shared/pickups';
 import type { PickupOrder, PickupBoard } from '../../../../shared/office';
 import { pickupsQuery } from '../api';
@@ -29,7 +30,12 @@ export function PickupBoardPage() {
         <button type="button" className={buttonClass('secondary')} onClick={() => setParams({ from: shift(board.from, 7) })}>Week after</button>
       </div>
       <Notice tone="caution" title="Loading safely">
-        Slabs are heavy and awkward. Lift with enough people, keep loads close to the body, and use a cart or forklift for anything over <Weight pounds={EQUIPMENT_ABOVE_LB} />. Follow your local workplace rules.
+        Slabs are heavy and awkward. {lifting({ weightLb: 1 }).basis} Anything heavier than two people should carry goes on a slab cart,
+        or is lifted with the forklift or hoist by a trained operator only (certified where local rules require it); keep buyers clear of a raised load.
+        Follow your local workplace rules and licensed practice.
+      </Notice>
+      <Notice tone="caution" title={STAFF_DUST_NOISE_CAUTION.title}>
+        Orders marked for flattening are flattened at the mill before pickup. {STAFF_DUST_NOISE_CAUTION.text}
       </Notice>
       {board.dates.map((d) => <DaySection key={d.date} day={d} board={board} />)}
     </div>
@@ -64,7 +70,7 @@ function DaySection({ day, board }: { day: PickupBoard['dates'][number]; board: 
 }
 
 function OrderCard({ order, board }: { order: PickupOrder; board: PickupBoard }) {
-  const heavy = order.totalWeightLb > EQUIPMENT_ABOVE_LB;
+  const heavy = order.totalWeightLb > 0 && lifting({ weightLb: Math.min(order.totalWeightLb, 20_000) }).needsEquipment;
   return (
     <li className="flex flex-col gap-2 rounded-md border border-line bg-surface p-3">
       <div className="flex flex-wrap items-center gap-2">

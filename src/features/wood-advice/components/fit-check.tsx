@@ -68,7 +68,7 @@ export function FitCheck({ speciesSlug, speciesName, widthIn, currentMcPercent, 
           <div className="flex flex-col gap-2">
             <p>
               In those conditions wood settles at about <strong>{formatPercent(result.emc)} moisture content</strong> (equilibrium moisture content,
-              USDA Wood Handbook equation 4-5). This slab is at {formatPercent(currentMcPercent)}{hasReading ? ' (latest reading)' : ' (assumed air-dry; no reading yet)'}.
+              USDA Wood Handbook equation 4-5). This slab is at {formatPercent(currentMcPercent)}{hasReading ? ' (latest reading)' : ' (typical of green wood; no reading yet)'}.
             </p>
             <ul className="list-disc pl-5">
               {result.changes.map((c) => (

@@ -33,6 +33,22 @@ export const inventoryColumns = [
   col.accessor('boardFeet', { header: 'Volume', cell: (c) => <BoardFeet value={c.getValue()} /> }),
   col.accessor('priceCents', { header: 'Price', cell: (c) => formatCents(c.getValue()) + (c.row.original.priceOverrideCents !== null ? ' (set)' : '') }),
   col.accessor('moisturePercent', { header: 'MC %', cell: (c) => { const v = c.getValue(); return v === null ? '—' : formatPercent(v); } }),
+  col.accessor((r) => r.airDry?.expectedOn ?? null, {
+    id: 'airDryExpectedOn', header: 'Air-dry by',
+    cell: (c) => {
+      const f = c.row.original.airDry;
+      if (!f) return '—';
+      if (f.basis === 'already-reached') return `since ${f.expectedOn}`;
+      if (!f.expectedOn) return <span title={f.method}>no date</span>;
+      return (
+        <span title={f.method}>
+          {f.expectedOn}
+          {f.earliestOn !== f.latestOn && <span className="block text-xs text-ink-soft">{f.earliestOn} – {f.latestOn}</span>}
+          {f.basis === 'rule-of-thumb' && <span className="block text-xs text-ink-soft">rule of thumb</span>}
+        </span>
+      );
+    },
+  }),
   col.accessor('photoCount', { header: 'Photos' }),
   col.accessor('yardStack', { header: 'Stack', cell: (c) => [c.getValue(), c.row.original.yardPosition].filter(Boolean).join(' · ') || '—' }),
 ];
