@@ -1,5 +1,6 @@
 import Stripe from 'stripe';
 import { AppError } from './errors';
+import { getLogger } from './logger';
 
 export type ChargeInput = {
   amountCents: number;
@@ -23,6 +24,8 @@ export type Payments = {
   charge(input: ChargeInput): Promise<ChargeResult>;
   refund(input: RefundInput): Promise<RefundResult>;
   parseWebhook(rawBody: Buffer | string, signatureHeader: string | undefined): PaymentEvent;
+  /** One cheap authenticated read, to tell that the payment service answers (readiness check). */
+  ping(): Promise<void>;
 };
 
 export type PaymentsOptions = {
@@ -42,7 +45,7 @@ function translate(err: unknown): never {
     throw new AppError(402, 'card_declined', DECLINED);
   }
   if (err instanceof Stripe.errors.StripeError) {
-    console.error(`[payments] ${err.type}: ${err.message}`);
+    getLogger().error({ part: 'payments', type: err.type, reason: err.message }, 'the payment service answered with an error');
     throw new AppError(502, 'payment_unavailable', 'The payment service did not answer as expected. Nothing was charged; please try again.');
   }
   throw err;
@@ -79,6 +82,9 @@ export function createPayments({ secretKey, host, port, protocol, webhookSecret,
       } catch (err) {
         return translate(err);
       }
+    },
+    async ping() {
+      await stripe.customers.list({ limit: 1 });
     },
     parseWebhook(rawBody, signatureHeader) {
       if (!signatureHeader) throw new AppError(400, 'bad_signature', 'The event is not signed.');

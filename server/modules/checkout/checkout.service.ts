@@ -10,6 +10,7 @@ import type { z } from 'zod';
 import { loadPricingRules } from '../pricing/pricing.service';
 import { withReadingsAndCovers, closeHolds } from '../holds/holds.repo';
 import { quoteSlab } from '../pricing/slab-quote';
+import { getLogger } from '../../lib/logger';
 import { isUniqueViolation } from '../holds/unique-violation';
 import { claimPickupPlace } from '../pickups/pickups.service';
 import { orderEmailInput, orderView } from './order-view';
@@ -138,7 +139,7 @@ export async function checkout(deps: CheckoutDeps, buyer: SessionUser, input: Ch
     await completeOrder(deps, buyer, prepared, chargeId, now);
   } catch (err) {
     // Money taken but the sale could not be recorded: give the money back before reporting.
-    console.error(`[checkout] order ${order.code} could not be completed after charge ${chargeId}; refunding`, err);
+    getLogger().error({ part: 'checkout', order: order.code, chargeId, err }, 'an order could not be completed after its charge; refunding');
     await deps.payments.refund({ chargeId, amountCents: order.totalCents, idempotencyKey: `${chargeKey(key)}-undo`, reason: 'duplicate' });
     await failOrder(deps.db, order, 'The sale could not be completed; the charge was refunded.', chargeId);
     if (err instanceof AppError) throw err;

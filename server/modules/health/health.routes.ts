@@ -1,0 +1,20 @@
+import { Router } from 'express';
+import { checkReadiness, type ReadinessDeps } from './readiness';
+
+/**
+ * GET /api/health: the process is alive (no dependencies touched).
+ * GET /api/ready: it can serve buyers now — 200 when every check passes, else 503 naming the failed ones.
+ */
+export function healthRoutes(deps: ReadinessDeps) {
+  const router = Router();
+  router.get('/health', (_req, res) => {
+    res.json({ ok: true });
+  });
+  router.get('/ready', async (_req, res) => {
+    const report = await checkReadiness(deps);
+    res.status(report.ready ? 200 : 503).set('Cache-Control', 'no-store').json({
+      ...report, ...(deps.isShuttingDown?.() ? { shuttingDown: true } : {}),
+    });
+  });
+  return router;
+}
