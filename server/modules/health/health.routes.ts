@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { checkReadiness, type ReadinessDeps } from './readiness';
+import { readinessChecker, type ReadinessDeps } from './readiness';
 
 /**
  * GET /api/health: the process is alive (no dependencies touched).
@@ -7,11 +7,12 @@ import { checkReadiness, type ReadinessDeps } from './readiness';
  */
 export function healthRoutes(deps: ReadinessDeps) {
   const router = Router();
+  const check = readinessChecker(deps);
   router.get('/health', (_req, res) => {
     res.json({ ok: true });
   });
   router.get('/ready', async (_req, res) => {
-    const report = await checkReadiness(deps);
+    const report = await check();
     res.status(report.ready ? 200 : 503).set('Cache-Control', 'no-store').json({
       ...report, ...(deps.isShuttingDown?.() ? { shuttingDown: true } : {}),
     });

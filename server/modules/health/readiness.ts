@@ -15,6 +15,8 @@ export type ReadinessDeps = {
   isShuttingDown?: () => boolean;
   /** Each check's own limit; all run at once, so the whole answer takes about this long at most. */
   checkTimeoutMs?: number;
+  /** A result is reused this long, so a burst of probes (several monitors, a proxy) costs one round of checks. */
+  reuseMs?: number;
 };
 
 export type CheckResult = 'ok' | 'failed' | 'timed out';
@@ -44,7 +46,7 @@ async function timed(name: string, work: () => Promise<unknown>, ms: number): Pr
 }
 
 /** Database answers, migrations applied, mail server and payment service reachable — checked at once. */
-export async function checkReadiness({ db, mailer, payments, isShuttingDown, checkTimeoutMs = 700 }: ReadinessDeps): Promise<Readiness> {
+export async function checkReadiness({ db, mailer, payments, isShuttingDown, checkTimeoutMs = 800 }: ReadinessDeps): Promise<Readiness> {
   const newest = newestMigrationMillis();
   const [database, migrations, mail, pay] = await Promise.all([
     timed('database', () => db.execute(sql`select 1`), checkTimeoutMs),
@@ -59,4 +61,19 @@ export async function checkReadiness({ db, mailer, payments, isShuttingDown, che
   const checks = { database, migrations, mail, payments: pay };
   const ready = !isShuttingDown?.() && Object.values(checks).every((c) => c === 'ok');
   return { ready, checks };
+}
+
+/**
+ * checkReadiness shared between callers: probes arriving while a round runs wait for that round,
+ * and its answer is reused for `reuseMs` (default 1 s). Shutting down is always reported at once.
+ */
+export function readinessChecker(deps: ReadinessDeps) {
+  const reuseMs = deps.reuseMs ?? 1000;
+  let last: { at: number; result: Promise<Readiness> } | null = null;
+  return async (): Promise<Readiness> => {
+    const now = Date.now();
+    if (!last || now - last.at > reuseMs) last = { at: now, result: checkReadiness(deps) };
+    const result = await last.result;
+    return deps.isShuttingDown?.() ? { ...result, ready: false } : result;
+  };
 }
