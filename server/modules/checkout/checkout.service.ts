@@ -15,6 +15,7 @@ import { isUniqueViolation } from '../holds/unique-violation';
 import { claimPickupPlace } from '../pickups/pickups.service';
 import { orderEmailInput, orderView } from './order-view';
 import * as repo from './checkout.repo';
+import { moveSlabs } from '../slabs/slab-state';
 
 type CheckoutInput = z.infer<typeof checkoutSchema>;
 export type CheckoutDeps = { db: Db; payments: Payments; publicUrl: string };
@@ -77,7 +78,7 @@ async function prepareOrder(db: Db, buyer: SessionUser, input: CheckoutInput, ke
 async function completeOrder(deps: CheckoutDeps, buyer: SessionUser, prepared: Awaited<ReturnType<typeof prepareOrder>>, chargeId: string, now: Date) {
   const { order, holdIds, slabIds } = prepared;
   await deps.db.transaction(async (tx) => {
-    const sold = await repo.markSlabsSold(tx, slabIds);
+    const sold = await moveSlabs(tx, slabIds, 'sold', 'sale', now);
     if (sold.length !== slabIds.length) throw new AppError(409, 'slab_gone', 'One of these slabs is no longer held for you.');
     await repo.setLineStatus(tx, order.id, 'sold'); // the unique index refuses a second sale of any slab
     await closeHolds(tx, holdIds, 'converted', buyer.id, now);

@@ -9,6 +9,7 @@ import { SLAB_STATUSES, type SlabStatus } from '../../../shared/slabs';
 import { assertDryEnoughOrConfirmed, assertPublishable, assertStaffMove } from './yard-slabs.workflow';
 import { withForecasts } from './yard-slabs.service';
 import * as repo from './yard-slabs.repo';
+import { moveEverySlab } from './slab-state';
 
 function parseQuery(raw: Record<string, unknown>) {
   const parsed = yardSlabQuerySchema.safeParse(raw);
@@ -69,7 +70,7 @@ export async function bulkSlabAction(db: Db, raw: unknown, actor: SessionUser): 
         assertStaffMove(from, to);
         // A slab well above the target MC is listed only from its own page, where the warning is confirmed.
         if (to === 'listed') { await assertPublishable(tx, id); await assertDryEnoughOrConfirmed(tx, id, false); }
-        await repo.updateSlab(tx, id, { status: to, ...(to === 'listed' ? { listedAt: new Date() } : {}) });
+        await moveEverySlab(tx, [id], to, 'yard');
         await recordAudit(tx, { actor, action: 'slab.status', entityType: 'slab', entityId: id, before: { status: from }, after: { status: to } });
         return to;
       });

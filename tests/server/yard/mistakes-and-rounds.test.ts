@@ -49,7 +49,7 @@ describe('deleting a slab recorded by mistake', () => {
     const onceListed = await slabRow(t.db, log, { status: 'ready', listedAt: new Date('2026-01-05T10:00:00Z') });
     const onceHeld = await slabRow(t.db, log, { status: 'ready' });
     const buyer = await t.signedInAs('buyer');
-    await t.db.insert(holds).values({ slabId: onceHeld.id, buyerId: buyer.id, status: 'released', expiresAt: new Date() });
+    await t.db.insert(holds).values({ slabId: onceHeld.id, buyerId: buyer.id, status: 'released', createdAt: new Date(Date.now() - 3_600_000), expiresAt: new Date(Date.now() + 3_600_000), closedAt: new Date(), closedBy: buyer.id });
 
     const answers = await Promise.all([listed, onceListed, onceHeld].map((s) => del(`/api/slabs/${s.id}`)));
     expect(answers.map((a) => a.status)).toEqual([409, 409, 409]);
