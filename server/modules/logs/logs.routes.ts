@@ -24,7 +24,7 @@ export function logRoutes({ db }: { db: Db }) {
     res.json(await getLog(db, parseLogId(String(req.params.id))));
   });
   router.patch('/logs/:id', staff, async (req, res) => {
-    res.json(await updateLog(db, parseLogId(String(req.params.id)), req.body));
+    res.json(await updateLog(db, parseLogId(String(req.params.id)), req.body, req.user!));
   });
   router.delete('/logs/:id', staff, async (req, res) => {
     res.json(await deleteLog(db, req.user!, parseLogId(String(req.params.id))));

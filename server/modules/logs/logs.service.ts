@@ -59,7 +59,7 @@ async function speciesIdFor(db: Db, slug: string) {
 const codeTaken = (code: string) =>
   new AppError(409, 'conflict', `Log code ${code} is already used.`, { code: [`${code} is already used by another log`] });
 
-export async function createLog(db: Db, raw: unknown, _actor: SessionUser, now = new Date()): Promise<LogDetail> {
+export async function createLog(db: Db, raw: unknown, actor: SessionUser, now = new Date()): Promise<LogDetail> {
   const input = createLogSchema.parse(raw);
   refuse(logDateProblems(input, millDay(now)));
   const speciesId = await speciesIdFor(db, input.speciesSlug);
@@ -69,9 +69,13 @@ export async function createLog(db: Db, raw: unknown, _actor: SessionUser, now =
   for (let attempt = 0; ; attempt++) {
     const code = input.code ?? (await nextLogCode(db, input.felledOn, now)).code;
     try {
-      const row = await repo.insertLog(db, {
-        ...rest, code, speciesId, originNote: rest.originNote ?? '', notes: rest.notes ?? '',
-        felledOn: rest.felledOn ?? null, milledOn: rest.milledOn ?? null,
+      const row = await db.transaction(async (tx) => {
+        const inserted = await repo.insertLog(tx, {
+          ...rest, code, speciesId, originNote: rest.originNote ?? '', notes: rest.notes ?? '',
+          felledOn: rest.felledOn ?? null, milledOn: rest.milledOn ?? null,
+        });
+        await recordAudit(tx, { actor, action: 'log.create', entityType: 'log', entityId: inserted.id, before: null, after: { code: inserted.code, speciesSlug: input.speciesSlug } });
+        return inserted;
       });
       return getLog(db, row.id);
     } catch (err) {
@@ -81,7 +85,7 @@ export async function createLog(db: Db, raw: unknown, _actor: SessionUser, now =
   }
 }
 
-export async function updateLog(db: Db, id: number, raw: unknown, now = new Date()): Promise<LogDetail> {
+export async function updateLog(db: Db, id: number, raw: unknown, actor: SessionUser | null = null, now = new Date()): Promise<LogDetail> {
   const input = updateLogSchema.parse(raw);
   refuse(logDateProblems(input, millDay(now)));
   const existing = await repo.findLog(db, id);
@@ -109,7 +113,13 @@ export async function updateLog(db: Db, id: number, raw: unknown, now = new Date
     const other = await repo.logCodeTaken(db, input.code);
     if (other && other !== id) throw codeTaken(input.code);
   }
-  if (Object.keys(values).length) await repo.updateLog(db, id, values);
+  if (Object.keys(values).length) {
+    await db.transaction(async (tx) => {
+      await repo.updateLog(tx, id, values);
+      const changed = Object.keys(input).filter((k) => (input as Record<string, unknown>)[k] !== (existing.log as Record<string, unknown>)[k]);
+      await recordAudit(tx, { actor, action: 'log.update', entityType: 'log', entityId: id, before: null, after: { fields: changed } });
+    });
+  }
   return getLog(db, id);
 }
 
