@@ -122,3 +122,22 @@ export async function updateLog(db: Db, id: number, raw: unknown, actor: Session
   }
   return getLog(db, id);
 }
+
+/** A log recorded by mistake can go while no slab has been recorded from it; the audit log keeps it. */
+export async function deleteLog(db: Db, actor: SessionUser, id: number) {
+  return db.transaction(async (tx) => {
+    const row = await repo.findLog(tx, id);
+    if (!row) throw notFound('That log');
+    const n = Number(row.slabCount);
+    if (n > 0) {
+      throw new AppError(409, 'not_deletable',
+        `Log ${row.log.code} cannot be deleted: ${n === 1 ? 'a slab was' : `${n} slabs were`} recorded from it. Delete ${n === 1 ? 'that slab' : 'those slabs'} first (only slabs never put on sale can be deleted).`);
+    }
+    await repo.deleteLogRow(tx, id);
+    await recordAudit(tx, {
+      actor, action: 'log.delete', entityType: 'log', entityId: id, after: null,
+      before: { code: row.log.code, species: row.speciesSlug, lengthIn: row.log.lengthIn, felledOn: row.log.felledOn, milledOn: row.log.milledOn },
+    });
+    return { deleted: row.log.code };
+  });
+}

@@ -1,9 +1,7 @@
 import type { SlabDetail } from '../../../../shared/slabs';
 import { LIVE_EDGE_LABELS } from '../../../../shared/slabs';
+import { describeDefect } from '../../../../shared/slab-input';
 import { useMeasures } from '../../../lib/units';
-import { DEFECT_KINDS, DEFECT_LABELS } from '../../../../shared/slab-input';
-
-const defectLabel = (kind: string) => ((DEFECT_KINDS as readonly string[]).includes(kind) ? DEFECT_LABELS[kind as (typeof DEFECT_KINDS)[number]] : 'Other');
 
 export function MeasurementsTable({ slab }: { slab: SlabDetail }) {
   const m = useMeasures();
@@ -15,7 +13,7 @@ export function MeasurementsTable({ slab }: { slab: SlabDetail }) {
     ['Board feet', `${m.boardFeet(slab.boardFeet)} (thickness × average width × length ÷ 144, in inches)`],
     ['Edges', LIVE_EDGE_LABELS[slab.liveEdge]],
     ['Figure', slab.figures.length ? `${slab.figures.join(', ')}${slab.figureNotes ? ` — ${slab.figureNotes}` : ''}` : slab.figureNotes || 'Plain'],
-    ['Defects', slab.defects.length ? slab.defects.map((d) => `${defectLabel(d.kind)}${d.note ? ` (${d.note})` : ''}`).join('; ') : 'None noted'],
+    ['Defects', slab.defects.length ? slab.defects.map((d) => describeDefect(d, m.length)).join('; ') : 'None noted'],
     ['In the yard', [slab.yardStack, slab.yardPosition].filter(Boolean).join(', ') || '—'],
   ];
   return (
