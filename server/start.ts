@@ -13,6 +13,9 @@ import { seedDemo } from './seed/seed-demo';
 import { ensureMillSettings } from './modules/mill-rules/mill-rules.service';
 import { startBackgroundJobs } from './jobs';
 
+/** Keys starting sk_test_local are placeholders that only the local fake accepts. */
+export const usesLocalPaymentFake = (secretKey: string) => secretKey.startsWith('sk_test_local');
+
 export type StartOptions = { env: Env; dev?: boolean; log?: (msg: string) => void };
 
 export type Running = {
@@ -36,10 +39,13 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
   const wantFakes = env.START_LOCAL_FAKES ? env.START_LOCAL_FAKES === 'true' : !production && !env.SMTP_PORT;
   const fakes = wantFakes ? await startLocalFakes({}) : null;
   const smtpPort = env.SMTP_PORT ?? fakes?.smtpPort ?? 25;
+  // The payment fake answers only for the local placeholder key; a real key (sk_test_… or sk_live_… from the
+  // provider) goes to the provider itself, and buyers see its real payment page — nothing else changes.
+  const paymentFake = fakes && usesLocalPaymentFake(env.STRIPE_SECRET_KEY) ? fakes : null;
   const stripe = {
-    host: env.STRIPE_HOST ?? (fakes ? '127.0.0.1' : undefined),
-    port: env.STRIPE_PORT ?? fakes?.stripePort,
-    protocol: env.STRIPE_PROTOCOL ?? (fakes ? ('http' as const) : undefined),
+    host: env.STRIPE_HOST ?? (paymentFake ? '127.0.0.1' : undefined),
+    port: env.STRIPE_PORT ?? paymentFake?.stripePort,
+    protocol: env.STRIPE_PROTOCOL ?? (paymentFake ? ('http' as const) : undefined),
   };
 
   const database = await openDatabase({ databaseUrl: env.DATABASE_URL, dataDir: path.join(env.DATA_DIR, 'pglite') });
@@ -65,6 +71,8 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(apiPort, env.HOST, () => resolve(s));
   });
+  // The local payment fake posts its signed events straight to this process (a live account has its endpoint registered instead).
+  paymentFake?.addWebhookEndpoint({ url: `http://127.0.0.1:${apiPort}/api/webhooks/payments`, secret: env.STRIPE_WEBHOOK_SECRET });
 
   let vite: { close(): Promise<void> } | null = null;
   if (dev) {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { ATTEMPT_STATUSES, ORDER_STATUSES, isAttempt, type OrderStatus } from './checkout';
 
 /** The office (admin) contract: inputs the API parses and the forms validate, plus response shapes. */
 
@@ -46,8 +47,8 @@ export type AuditEntryView = {
 export type AuditPage = { items: AuditEntryView[]; total: number; page: number; pageSize: number; actions: string[]; entityTypes: string[] };
 
 // --- orders & refunds ------------------------------------------------------------------------
-export const ORDER_STATUSES = ['pending-payment', 'paid', 'picked-up', 'no-show', 'refunded', 'cancelled'] as const;
-export type OrderStatus = (typeof ORDER_STATUSES)[number];
+// One list of order states for both sides; attempts (pending-payment, abandoned) are listed only when asked for.
+export { ORDER_STATUSES, ATTEMPT_STATUSES, isAttempt, type OrderStatus };
 
 export const orderListQuerySchema = z.object({
   status: z.enum(ORDER_STATUSES, { error: 'Unknown order status' }).optional(),

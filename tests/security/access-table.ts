@@ -26,6 +26,8 @@ export const ACCESS: Record<string, Access> = {
   'POST /api/checkout': 'signed-in',
   'GET /api/orders': 'signed-in',
   'GET /api/orders/:id': 'signed-in',
+  'POST /api/orders/:id/payment-check': 'signed-in',
+  'POST /api/orders/:id/payment-cancel': 'signed-in',
   'GET /api/pickup-slots': 'signed-in',
   'GET /api/pickup-settings': 'admin',
   'PUT /api/pickup-settings': 'admin',

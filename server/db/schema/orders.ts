@@ -10,10 +10,12 @@ export const orders = pgTable('orders', {
   id: serial('id').primaryKey(),
   code: text('code').notNull().unique(),
   buyerId: text('buyer_id').notNull().references(() => user.id),
-  // pending-payment | paid | picked-up | no-show | refunded | cancelled
+  // Attempts: pending-payment | abandoned (never paid). Orders: paid | picked-up | no-show | refunded | cancelled.
   status: text('status').notNull(),
   slabsCents: integer('slabs_cents').notNull(),
   servicesCents: integer('services_cents').notNull().default(0),
+  /** Sales tax, its own line; totalCents includes it. */
+  taxCents: integer('tax_cents').notNull().default(0),
   totalCents: integer('total_cents').notNull(),
   refundedCents: integer('refunded_cents').notNull().default(0),
   totalWeightLb: doublePrecision('total_weight_lb').notNull(),
@@ -23,6 +25,9 @@ export const orders = pgTable('orders', {
   pickupOn: date('pickup_on', { mode: 'string' }),
   idempotencyKey: text('idempotency_key').notNull().unique(),
   chargeId: text('charge_id'),
+  /** The provider's hosted payment page for this attempt (a checkout session) and where the buyer is sent. */
+  checkoutSessionId: text('checkout_session_id').unique(),
+  paymentUrl: text('payment_url'),
   disputed: boolean('disputed').notNull().default(false),
   reminderSentAt: timestamp('reminder_sent_at', { withTimezone: true }),
   pickedUpAt: timestamp('picked_up_at', { withTimezone: true }),

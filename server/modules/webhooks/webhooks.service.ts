@@ -3,13 +3,21 @@ import type { Db } from '../../db/client';
 import { orders } from '../../db/schema/index';
 import { recordAudit } from '../../lib/audit';
 import type { PaymentEvent } from '../../lib/payments';
+import { checkAttempt, type SettleDeps } from '../checkout/payment-settlement';
 
 /**
  * Applies a verified provider event. Each handler sets state from the event's own totals, so a
  * repeated delivery changes nothing the second time.
  */
-export async function applyPaymentEvent(db: Db, event: PaymentEvent) {
+export async function applyPaymentEvent(deps: SettleDeps, event: PaymentEvent) {
   if (event.type === 'other') return { handled: false };
+  if (event.type === 'charge.refunded' || event.type === 'charge.dispute.created') return applyChargeEvent(deps.db, event);
+  // A page was paid or expired: the event only says which page; the provider's record of it (read through the SDK) decides.
+  const outcome = await checkAttempt(deps, event.sessionId);
+  return { handled: outcome !== 'unknown' };
+}
+
+async function applyChargeEvent(db: Db, event: Extract<PaymentEvent, { type: 'charge.refunded' | 'charge.dispute.created' }>) {
   return db.transaction(async (tx) => {
     const [order] = await tx.select().from(orders).where(eq(orders.chargeId, event.chargeId)).for('update');
     if (!order) return { handled: false };

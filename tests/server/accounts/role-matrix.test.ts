@@ -26,6 +26,8 @@ const MATRIX: Row[] = [
   ['post', '/api/checkout', 'signed-in'],
   ['get', '/api/orders', 'signed-in'],
   ['get', `/api/orders/${NONE}`, 'signed-in'],
+  ['post', `/api/orders/${NONE}/payment-check`, 'signed-in'],
+  ['post', `/api/orders/${NONE}/payment-cancel`, 'signed-in'],
   ['get', '/api/pickup-slots', 'signed-in'],
   // yard desk (mill staff)
   ['get', '/api/logs', STAFF],

@@ -2,7 +2,8 @@ import type { OrderStatus } from '../../../../shared/office';
 
 /** Plain words for order states, used on every office screen. */
 export const ORDER_STATUS_LABELS: Record<OrderStatus, string> = {
-  'pending-payment': 'Awaiting payment',
+  'pending-payment': 'Attempt: payment page open',
+  abandoned: 'Attempt: not paid',
   paid: 'Paid, waiting at the yard',
   'picked-up': 'Collected',
   'no-show': 'Not collected',
