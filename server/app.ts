@@ -7,6 +7,7 @@ import type { Db } from './db/client';
 import type { Auth } from './lib/auth';
 import type { Mailer } from './lib/mail';
 import type { Payments } from './lib/payments';
+import type { TrustProxy } from './lib/trust-proxy';
 import { apiNotFound, errorMiddleware } from './lib/errors';
 import { loadUser } from './lib/session';
 import { sameOriginOnly } from './lib/same-origin';
@@ -24,6 +25,7 @@ import { yardSlabRoutes } from './modules/slabs/yard-slabs.routes';
 import { officeRoutes } from './modules/office/office.routes';
 import { millRulesRoutes } from './modules/mill-rules/mill-rules.routes';
 import { readingRoutes } from './modules/readings/readings.routes';
+import { shopAddressRoutes } from './modules/shop-address/shop-address.routes';
 
 export type AppDeps = {
   db: Db;
@@ -39,14 +41,16 @@ export type AppDeps = {
   uploadsDir: string;
   /** Built client to serve (production); omitted in dev and API tests. */
   clientDir?: string;
-  /** Origins allowed to send state-changing requests (the public URL). */
+  /** Origins allowed to send state-changing requests (the public URL and TRUSTED_ORIGINS). */
   trustedOrigins?: string[];
+  /** Which hops may tell the client's address and scheme (TRUST_PROXY); default none. */
+  trustProxy?: TrustProxy;
 };
 
 export function createApp(deps: AppDeps) {
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', deps.trustProxy ?? false);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -63,8 +67,14 @@ export function createApp(deps: AppDeps) {
         },
       },
       crossOriginEmbedderPolicy: false,
+      // Sent below, and only over https: over plain http the header is meaningless and a local run must stay reachable.
+      strictTransportSecurity: false,
     }),
   );
+  app.use((req, res, next) => {
+    if (req.secure) res.setHeader('Strict-Transport-Security', 'max-age=15552000; includeSubDomains');
+    next();
+  });
 
   // The auth library parses its own bodies, so it is mounted before express.json().
   app.use('/api/auth', authGate({ trustedOrigins: deps.trustedOrigins }));
@@ -89,6 +99,7 @@ export function createApp(deps: AppDeps) {
   api.use(readingRoutes(deps));
   api.use(officeRoutes(deps));
   api.use(millRulesRoutes(deps));
+  api.use(shopAddressRoutes({ publicUrl: deps.publicUrl ?? deps.trustedOrigins?.[0] ?? 'http://localhost:3000' }));
   api.use(apiNotFound);
   app.use('/api', api);
 

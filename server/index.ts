@@ -1,11 +1,14 @@
+import fs from 'node:fs';
 import path from 'node:path';
-import { readEnv } from './env';
+import { readEnv, wantsDemoData } from './env';
 import { startStickerline } from './start';
 import { DEMO_ACCOUNTS } from './seed/demo-data';
 
 /** `npm start` (built client) and `npm run dev` (Vite with hot reload in front of the API). */
 async function main() {
   const dev = process.argv.includes('--dev');
+  // Settings from a local .env file; anything already in the environment wins.
+  if (fs.existsSync('.env')) process.loadEnvFile('.env');
   const env = readEnv();
   const running = await startStickerline({ env, dev });
   const { fakes, database } = running;
@@ -16,7 +19,7 @@ async function main() {
     console.log(`  Payment fake (test mode): http://127.0.0.1:${fakes.stripePort}`);
   }
   console.log(`  Database: ${database.kind === 'postgres' ? 'PostgreSQL server (DATABASE_URL)' : path.resolve(env.DATA_DIR, 'pglite')}`);
-  if (env.NODE_ENV !== 'production' && env.SEED_DEMO === 'true') {
+  if (env.NODE_ENV !== 'production' && wantsDemoData(env)) {
     console.log('  Demo accounts (demo only — change or remove before real use):');
     for (const a of DEMO_ACCOUNTS) console.log(`    ${a.role.padEnd(6)} ${a.email}  /  ${a.password}`);
   }

@@ -1,13 +1,15 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import type { Server } from 'node:http';
-import type { Env } from './env';
+import { wantsDemoData, type Env } from './env';
+import { configProblems, databaseProblems, refuseIfAny } from './production-checks';
 import { openDatabase, migrateDatabase, type Database } from './db/client';
 import { createAuth } from './lib/auth';
 import { createMailer } from './lib/mail';
 import { createPayments } from './lib/payments';
 import { startLocalFakes, type LocalFakes } from './lib/local-fakes';
 import { authSecret } from './lib/dev-secret';
+import { shopOrigins } from './lib/shop-origins';
 import { createApp } from './app';
 import { seedDemo } from './seed/seed-demo';
 import { ensureMillSettings } from './modules/mill-rules/mill-rules.service';
@@ -33,11 +35,24 @@ export type Running = {
  */
 export async function startStickerline({ env, dev = false, log = console.log }: StartOptions): Promise<Running> {
   const production = env.NODE_ENV === 'production';
+  // Production refuses the demo's defaults before anything starts (see server/production-checks.ts).
+  const problems = production ? configProblems(env) : [];
   fs.mkdirSync(env.DATA_DIR, { recursive: true });
   fs.mkdirSync(env.UPLOADS_DIR, { recursive: true });
+  if (production) {
+    // The database is opened only to look for demo accounts; nothing is migrated or written before the checks pass.
+    const probe = await openDatabase({ databaseUrl: env.DATABASE_URL, dataDir: path.join(env.DATA_DIR, 'pglite') });
+    try {
+      problems.push(...(await databaseProblems(probe.db)));
+    } finally {
+      await probe.close();
+    }
+    refuseIfAny(problems);
+  }
 
   const wantFakes = env.START_LOCAL_FAKES ? env.START_LOCAL_FAKES === 'true' : !production && !env.SMTP_PORT;
-  const fakes = wantFakes ? await startLocalFakes({}) : null;
+  // MAILDEV_WEB_PORT keeps the inbox at one address across restarts (a bookmarked tab keeps working).
+  const fakes = wantFakes ? await startLocalFakes({ mailWebPort: env.MAILDEV_WEB_PORT }) : null;
   const smtpPort = env.SMTP_PORT ?? fakes?.smtpPort ?? 25;
   // The payment fake answers only for the local placeholder key; a real key (sk_test_… or sk_live_… from the
   // provider) goes to the provider itself, and buyers see its real payment page — nothing else changes.
@@ -53,11 +68,11 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
 
   const publicPort = env.PORT;
   const apiPort = dev ? publicPort + 1 : publicPort;
-  const url = env.PUBLIC_URL ?? `http://localhost:${publicPort}`;
+  const { publicUrl: url, trustedOrigins } = shopOrigins(env);
   const mailer = createMailer({ host: env.SMTP_HOST, port: smtpPort, from: env.MAIL_FROM });
-  const auth = createAuth({ db: database.db, secret: authSecret(env.BETTER_AUTH_SECRET, env.DATA_DIR, production), baseURL: url, mailer });
+  const auth = createAuth({ db: database.db, secret: authSecret(env.BETTER_AUTH_SECRET, env.DATA_DIR, production), baseURL: url, trustedOrigins, mailer });
 
-  if (env.SEED_DEMO === 'true') {
+  if (wantsDemoData(env)) {
     await seedDemo({ db: database.db, auth, uploadsDir: env.UPLOADS_DIR, log: (m: string) => log(`[seed] ${m}`) });
   }
   await ensureMillSettings(database.db);
@@ -65,7 +80,7 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
   const payments = createPayments({ secretKey: env.STRIPE_SECRET_KEY, ...stripe, webhookSecret: env.STRIPE_WEBHOOK_SECRET });
   const app = createApp({
     db: database.db, auth, mailer, payments, publicUrl: url, uploadsDir: env.UPLOADS_DIR,
-    clientDir: dev ? undefined : 'dist', trustedOrigins: [url],
+    clientDir: dev ? undefined : 'dist', trustedOrigins, trustProxy: env.TRUST_PROXY,
   });
   const jobs = startBackgroundJobs({ db: database.db, mailer, publicUrl: url });
   const server: Server = await new Promise((resolve) => {

@@ -21,18 +21,20 @@ export type AuthOptions = {
   db: Db;
   secret: string;
   baseURL: string;
+  /** Origins allowed to sign in (and to be sent back to after a password reset); default: baseURL's. */
+  trustedOrigins?: string[];
   mailer: Mailer;
   /** Sign-in/sign-up attempts per minute per address; tests lower or raise it. */
   signInLimitPerMinute?: number;
 };
 
-export function createAuth({ db, secret, baseURL, mailer, signInLimitPerMinute = 10 }: AuthOptions) {
+export function createAuth({ db, secret, baseURL, trustedOrigins, mailer, signInLimitPerMinute = 10 }: AuthOptions) {
   return betterAuth({
     appName: 'Stickerline',
     secret,
     baseURL,
     basePath: '/api/auth',
-    trustedOrigins: [baseURL],
+    trustedOrigins: trustedOrigins ?? [baseURL],
     database: drizzleAdapter(db, { provider: 'pg', schema }),
     emailAndPassword: {
       enabled: true,
@@ -51,8 +53,8 @@ export function createAuth({ db, secret, baseURL, mailer, signInLimitPerMinute =
       }),
     ],
     advanced: {
-      // httpOnly + SameSite=Lax always; the Secure flag (and __Secure- prefix) only over https,
-      // or the browser would drop the cookie on plain-http local runs.
+      // httpOnly + SameSite=Lax always; the Secure flag (and __Secure- prefix) when the public address
+      // is https (behind a TLS proxy), not on plain-http yard or local runs where the browser would drop it.
       useSecureCookies: baseURL.startsWith('https://'),
       ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
       // The library turns its origin and redirect-URL checks off when NODE_ENV is 'test'; keep them

@@ -3,6 +3,9 @@ import { spawn, type ChildProcess } from 'node:child_process';
 
 const ROOT = path.resolve(import.meta.dirname, '../..');
 
+/** How the shop is started as one process: the same command line as deploy/stickerline.service. */
+export const SERVER_ARGS = ['--import', 'tsx', 'server/index.ts'];
+
 export type ChildServer = { proc: ChildProcess; base: string; output: () => string };
 
 /**
@@ -13,7 +16,7 @@ export async function startChildServer(env: Record<string, string>, port: number
   const base = `http://127.0.0.1:${port}`;
   const clean = { ...process.env };
   delete clean.DATABASE_URL;
-  const proc = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+  const proc = spawn(process.execPath, SERVER_ARGS, {
     cwd: ROOT, env: { ...clean, NODE_ENV: 'development', PORT: String(port), HOST: '127.0.0.1', PUBLIC_URL: base, ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });

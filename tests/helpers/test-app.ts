@@ -8,6 +8,7 @@ import { createApp } from '../../server/app';
 import { createAuth, type Role } from '../../server/lib/auth';
 import { createMailer } from '../../server/lib/mail';
 import { createPayments } from '../../server/lib/payments';
+import type { TrustProxy } from '../../server/lib/trust-proxy';
 import { user } from '../../server/db/schema/index';
 import { freshDatabase } from './test-db';
 
@@ -17,24 +18,37 @@ export const TEST_WEBHOOK_SECRET = 'whsec_test_only_secret';
 let counter = 0;
 
 /** The real app on a fresh database, with the run's mail catcher; close() in afterAll. */
-export async function createTestApp(opts: { signInLimitPerMinute?: number; holdHours?: number; writeLimitPerMinute?: number } = {}) {
+export type TestAppOptions = {
+  signInLimitPerMinute?: number;
+  holdHours?: number;
+  writeLimitPerMinute?: number;
+  /** The shop's address (default TEST_ORIGIN) and every origin it trusts (default just that one). */
+  publicUrl?: string;
+  trustedOrigins?: string[];
+  /** Default 'loopback': supertest connects over loopback, so tests can pose as clients behind a proxy. */
+  trustProxy?: TrustProxy;
+};
+
+export async function createTestApp(opts: TestAppOptions = {}) {
+  const publicUrl = opts.publicUrl ?? TEST_ORIGIN;
+  const trustedOrigins = opts.trustedOrigins ?? [publicUrl];
   const database = await freshDatabase();
   const uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), 'stickerline-uploads-'));
   const mailer = createMailer({ host: '127.0.0.1', port: inject('smtpPort'), from: 'Stickerline <yard@stickerline.test>' });
   const auth = createAuth({
-    db: database.db, secret: 'test-secret-test-secret-test-secret!', baseURL: TEST_ORIGIN, mailer,
+    db: database.db, secret: 'test-secret-test-secret-test-secret!', baseURL: publicUrl, trustedOrigins, mailer,
     signInLimitPerMinute: opts.signInLimitPerMinute ?? 1000,
   });
   const payments = createPayments({ secretKey: 'sk_test_local_fake', host: '127.0.0.1', port: inject('stripePort'), protocol: 'http', webhookSecret: TEST_WEBHOOK_SECRET });
-  const app = createApp({ db: database.db, auth, mailer, payments, uploadsDir, trustedOrigins: [TEST_ORIGIN], holdHours: opts.holdHours,
-    writeLimitPerMinute: opts.writeLimitPerMinute ?? 0 });
+  const app = createApp({ db: database.db, auth, mailer, payments, uploadsDir, trustedOrigins, holdHours: opts.holdHours,
+    writeLimitPerMinute: opts.writeLimitPerMinute ?? 0, trustProxy: opts.trustProxy ?? ['loopback'] });
 
   /** Signs up a new account with `role` and returns a cookie-keeping agent for it. */
   async function signedInAs(role: Role, name = `${role} ${++counter}`) {
     const email = `${role}-${Date.now()}-${++counter}@example.test`;
     const password = 'correct horse battery';
     const agent = request.agent(app);
-    const res = await agent.post('/api/auth/sign-up/email').set('Origin', TEST_ORIGIN).send({ email, password, name });
+    const res = await agent.post('/api/auth/sign-up/email').set('Origin', publicUrl).send({ email, password, name });
     if (res.status !== 200) throw new Error(`sign-up failed: ${res.status} ${res.text}`);
     const [row] = await database.db.update(user).set({ role }).where(eq(user.email, email)).returning();
     return { agent, email, password, id: row.id, name };

@@ -43,6 +43,7 @@ export const ACCESS: Record<string, Access> = {
   'GET /api/yard/slabs.csv': 'staff',
   'POST /api/yard/slabs/bulk': 'staff',
   'GET /api/yard/slabs/:id': 'staff',
+  'GET /api/yard/shop-address': 'staff',
   'POST /api/figure-kinds': 'staff',
   'GET /api/slabs/:id/photos': 'staff',
   'POST /api/slabs/:id/photos': 'staff',

@@ -96,3 +96,14 @@ describe('security headers', () => {
     expect(fs.readdirSync(t.uploadsDir).length).toBe(before);
   });
 });
+
+describe('Strict-Transport-Security', () => {
+  it('is sent only when the request came over https (directly or through the trusted proxy)', async () => {
+    for (const path of ['/api/health', '/api/slabs', '/api/me', '/uploads/none.webp']) {
+      const plain = await request(t.app).get(path);
+      expect(plain.headers['strict-transport-security'], path).toBeUndefined();
+      const secure = await request(t.app).get(path).set('X-Forwarded-Proto', 'https');
+      expect(secure.headers['strict-transport-security'], path).toMatch(/max-age=\d{7,}/);
+    }
+  });
+});

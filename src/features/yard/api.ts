@@ -17,7 +17,13 @@ export const yardKeys = {
   slab: (id: number) => [...yardKeys.all, 'slabs', 'detail', id] as const,
   figureKinds: () => [...yardKeys.all, 'figure-kinds'] as const,
   species: () => [...yardKeys.all, 'species'] as const,
+  shopAddress: () => [...yardKeys.all, 'shop-address'] as const,
 };
+
+export type ShopAddress = { url: string; phonesCanReach: boolean; suggestions: string[] };
+
+export const shopAddressQuery = () =>
+  queryOptions({ queryKey: yardKeys.shopAddress(), queryFn: () => apiFetch<ShopAddress>('/api/yard/shop-address'), staleTime: Infinity });
 
 export const logListQuery = () =>
   queryOptions({ queryKey: yardKeys.logs(), queryFn: async () => (await apiFetch<{ items: LogSummary[] }>('/api/logs')).items });

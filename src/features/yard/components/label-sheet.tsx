@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { useQueries } from '@tanstack/react-query';
+import { useQueries, useQuery } from '@tanstack/react-query';
 import QRCode from 'qrcode';
 import type { YardSlabDetail } from '../../../../shared/slab-input';
 import { roundBoardFeet, toSixteenths } from '../../../../shared/wood/index';
@@ -7,13 +7,15 @@ import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { PageTitle } from '../../../components/ui/page-title';
 import { paths } from '../../../paths';
-import { yardSlabQuery } from '../api';
+import { shopAddressQuery, yardSlabQuery } from '../api';
 
 const MAX_LABELS = 60;
 
 function SlabLabel({ slab }: { slab: YardSlabDetail }) {
   const [qr, setQr] = useState<string | null>(null);
-  const url = `${window.location.origin}${paths.slab(slab.id)}`;
+  // The shop's public address, so a label printed at a desk opened on localhost still works on a phone.
+  const base = useQuery(shopAddressQuery()).data?.url ?? window.location.origin;
+  const url = `${base}${paths.slab(slab.id)}`;
   useEffect(() => {
     let live = true;
     QRCode.toDataURL(url, { margin: 1, width: 240, errorCorrectionLevel: 'M' }).then((d) => live && setQr(d), () => live && setQr(null));

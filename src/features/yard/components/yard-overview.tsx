@@ -7,6 +7,7 @@ import { PageTitle } from '../../../components/ui/page-title';
 import { paths } from '../../../paths';
 import { inventoryQuery, type InventoryFilters } from '../api';
 import { InventoryTable } from './inventory-table';
+import { PhoneLink } from './phone-link';
 
 type Props = { filters: InventoryFilters; onFiltersChange: (next: InventoryFilters) => void };
 
@@ -37,6 +38,7 @@ export function YardOverview({ filters, onFiltersChange }: Props) {
           ))}
         </ul>
       </nav>
+      <PhoneLink />
       <InventoryTable filters={filters} onFiltersChange={onFiltersChange} />
     </div>
   );
