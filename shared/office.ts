@@ -115,10 +115,21 @@ export type ActiveHold = {
 };
 
 // --- the mill's numbers ------------------------------------------------------------------------
-export type MonthlySpeciesSales = { month: string; speciesName: string; boardFeet: number; revenueCents: number; slabs: number };
+/** Money of sold lines, split by kind; refunds are counted against the month of the sale they undo. */
+export type SalesMoney = {
+  woodCents: number; servicesCents: number; taxCents: number;
+  refundedWoodCents: number; refundedServicesCents: number; refundedTaxCents: number;
+  /** Wood plus services, net of refunds: the mill's revenue (tax is collected for the state, not revenue). */
+  revenueCents: number;
+  /** Tax collected net of tax refunded. */
+  netTaxCents: number;
+};
+export type MonthlySpeciesSales = SalesMoney & { month: string; speciesName: string; boardFeet: number; slabs: number };
 export type SlabStatusCount = { status: string; count: number };
 export type MillNumbers = {
   sales: MonthlySpeciesSales[];
+  /** Over all months: equals the sum of the paid orders' amounts and refunds, to the cent. */
+  totals: SalesMoney;
   statusCounts: SlabStatusCount[];
   averageDaysMilledToSold: number | null;
   soldSlabsWithMillDate: number;

@@ -2,7 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { PageTitle } from '../../../components/ui/page-title';
 import { formatCents } from '../../../../shared/wood/index';
-import type { MillNumbers } from '../../../../shared/office';
+import type { MillNumbers, SalesMoney } from '../../../../shared/office';
 import { numbersQuery } from '../api';
 
 // Species colours picked from the theme's wood tones so the stacks stay readable side by side.
@@ -40,7 +40,7 @@ export function NumbersPage() {
           {species.map((s, i) => <Bar key={s} dataKey={s} stackId="bf" fill={PALETTE[i % PALETTE.length]} />)}
         </BarChart>
       </ChartBox>
-      <ChartBox title="Revenue per month (dollars), by species">
+      <ChartBox title="Revenue per month, net of refunds (dollars), by species">
         <BarChart data={byMonth(data.sales, 'revenueCents')}>
           <CartesianGrid strokeDasharray="3 3" /><XAxis dataKey="month" /><YAxis /><Tooltip /><Legend />
           {species.map((s, i) => <Bar key={s} dataKey={s} stackId="rev" fill={PALETTE[i % PALETTE.length]} />)}
@@ -72,16 +72,20 @@ function NumbersTables({ data }: { data: MillNumbers }) {
     <section aria-labelledby="numbers-table-h" className="flex flex-col gap-4">
       <h2 id="numbers-table-h" className="font-display text-lg font-bold">The same numbers as tables</h2>
       <div className="overflow-x-auto">
-        <table className="w-full min-w-[28rem] text-left text-sm">
-          <caption className="text-left font-semibold">Sold per month and species</caption>
-          <thead><tr className="border-b border-line"><th scope="col">Month</th><th scope="col">Species</th><th scope="col">Slabs</th><th scope="col">Board feet</th><th scope="col">Revenue</th></tr></thead>
+        <table className="w-full min-w-[44rem] text-left text-sm">
+          <caption className="text-left font-semibold">Sold per month and species (refunds count against the month of the sale)</caption>
+          <thead><tr className="border-b border-line"><th scope="col">Month</th><th scope="col">Species</th><th scope="col">Slabs</th><th scope="col">Board feet</th><th scope="col">Wood</th><th scope="col">Services</th><th scope="col">Refunded</th><th scope="col">Revenue (net)</th><th scope="col">Sales tax (net)</th></tr></thead>
           <tbody>
             {data.sales.map((s) => (
               <tr key={`${s.month}-${s.speciesName}`} className="border-b border-line/60">
-                <td>{s.month}</td><td>{s.speciesName}</td><td>{s.slabs}</td><td>{s.boardFeet.toFixed(2)}</td><td>{formatCents(s.revenueCents)}</td>
+                <td>{s.month}</td><td>{s.speciesName}</td><td>{s.slabs}</td><td>{s.boardFeet.toFixed(2)}</td>
+                <MoneyCells m={s} />
               </tr>
             ))}
-            {!data.sales.length && <tr><td colSpan={5}>Nothing sold yet.</td></tr>}
+            {data.sales.length > 0 && (
+              <tr className="font-semibold"><th scope="row" colSpan={4}>All months</th><MoneyCells m={data.totals} /></tr>
+            )}
+            {!data.sales.length && <tr><td colSpan={9}>Nothing sold yet.</td></tr>}
           </tbody>
         </table>
       </div>
@@ -93,5 +97,15 @@ function NumbersTables({ data }: { data: MillNumbers }) {
         </tbody>
       </table>
     </section>
+  );
+}
+
+function MoneyCells({ m }: { m: SalesMoney }) {
+  const refunded = m.refundedWoodCents + m.refundedServicesCents + m.refundedTaxCents;
+  return (
+    <>
+      <td>{formatCents(m.woodCents)}</td><td>{formatCents(m.servicesCents)}</td><td>{refunded ? `−${formatCents(refunded)}` : formatCents(0)}</td>
+      <td>{formatCents(m.revenueCents)}</td><td>{formatCents(m.netTaxCents)}</td>
+    </>
   );
 }
