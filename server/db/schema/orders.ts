@@ -1,6 +1,6 @@
 import { sql } from 'drizzle-orm';
 import {
-  boolean, date, doublePrecision, index, integer, jsonb, pgTable, serial, text, timestamp, uniqueIndex,
+  boolean, check, date, doublePrecision, index, integer, jsonb, pgTable, serial, text, timestamp, uniqueIndex,
 } from 'drizzle-orm/pg-core';
 import { user } from './auth';
 import { slabs } from './slabs';
@@ -55,6 +55,8 @@ export const orderLines = pgTable('order_lines', {
   withFlattening: boolean('with_flattening').notNull().default(false),
   slabCents: integer('slab_cents').notNull(),
   servicesCents: integer('services_cents').notNull().default(0),
+  /** This line's share of the order's sales tax (the order's tax spread over lines, adding up exactly). */
+  taxCents: integer('tax_cents').notNull().default(0),
   totalCents: integer('total_cents').notNull(),
 }, (t) => [
   // A slab is one of a kind: at most one sold line can exist for it.
@@ -74,3 +76,20 @@ export const payments = pgTable('payments', {
   createdBy: text('created_by'),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
 }, (t) => [index('payments_order_idx').on(t.orderId)]);
+
+/**
+ * Which part of a refund was wood, services and tax on which line: the office numbers add these
+ * up, so revenue net of refunds reconciles with the orders to the cent.
+ */
+export const refundLines = pgTable('refund_lines', {
+  id: serial('id').primaryKey(),
+  paymentId: integer('payment_id').notNull().references(() => payments.id, { onDelete: 'cascade' }),
+  orderLineId: integer('order_line_id').notNull().references(() => orderLines.id, { onDelete: 'cascade' }),
+  woodCents: integer('wood_cents').notNull(),
+  servicesCents: integer('services_cents').notNull(),
+  taxCents: integer('tax_cents').notNull(),
+}, (t) => [
+  index('refund_lines_payment_idx').on(t.paymentId),
+  index('refund_lines_line_idx').on(t.orderLineId),
+  check('refund_lines_amounts_not_negative', sql`${t.woodCents} >= 0 and ${t.servicesCents} >= 0 and ${t.taxCents} >= 0`),
+]);

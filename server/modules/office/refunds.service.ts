@@ -11,6 +11,7 @@ import type { CreateRefundInput } from '../../../shared/office';
 import * as orders from './orders.repo';
 import * as repo from './refunds.repo';
 import { getOrderDetail, toPaymentView } from './orders.service';
+import { recordRefundAllocation } from './refund-allocation';
 
 export type RefundDeps = { db: Db; payments: Payments; mailer: Mailer; publicUrl?: string; trustedOrigins?: string[] };
 export type RefundRequest = Required<Omit<CreateRefundInput, 'slabIds'>> & { slabIds: number[]; idempotencyKey: string };
@@ -77,6 +78,7 @@ export async function issueRefund(deps: RefundDeps, actor: SessionUser | null, o
     const current = (await orders.lockOrder(tx, orderId))!;
     const row = await repo.settleRefund(tx, payment.id, { status: 'succeeded', providerId: providerRefundId });
     const lines = (await orders.linesOf(tx, [orderId])).map((l) => l.line).filter((l) => r.slabIds.includes(l.slabId) && l.status === 'sold');
+    await recordRefundAllocation(tx, { orderId, paymentId: payment.id, amountCents: r.amountCents, fullLineIds: lines.map((l) => l.id) });
     await orders.setLinesStatus(tx, lines.map((l) => l.id), 'refunded');
     await orders.setSlabStatus(tx, lines.map((l) => l.slabId), r.returnSlabsTo);
     const refundedCents = current.refundedCents + r.amountCents;

@@ -1,6 +1,8 @@
 import { eq } from 'drizzle-orm';
 import type { Db } from '../../db/client';
-import { orders } from '../../db/schema/index';
+import { orders, payments } from '../../db/schema/index';
+import { pendingRefundCents } from '../office/refunds.repo';
+import { recordRefundAllocation } from '../office/refund-allocation';
 import { recordAudit } from '../../lib/audit';
 import type { PaymentEvent } from '../../lib/payments';
 import { checkAttempt, type SettleDeps } from '../checkout/payment-settlement';
@@ -24,10 +26,20 @@ async function applyChargeEvent(db: Db, event: Extract<PaymentEvent, { type: 'ch
     const before = { status: order.status, refundedCents: order.refundedCents, disputed: order.disputed };
     let after = before;
     if (event.type === 'charge.refunded') {
-      const refundedCents = Math.min(order.totalCents, Math.max(order.refundedCents, event.amountRefundedCents));
-      const status = refundedCents >= order.totalCents ? 'refunded' : order.status;
-      after = { ...before, refundedCents, status };
-      await tx.update(orders).set({ refundedCents, status }).where(eq(orders.id, order.id));
+      // Refunds the shop asked for are already (or about to be) recorded; only money refunded elsewhere is new here.
+      const known = order.refundedCents + (await pendingRefundCents(tx, order.id));
+      const extra = Math.min(order.totalCents, event.amountRefundedCents) - known;
+      if (extra > 0) {
+        const refundedCents = order.refundedCents + extra;
+        const status = refundedCents >= order.totalCents ? 'refunded' : order.status;
+        after = { ...before, refundedCents, status };
+        await tx.update(orders).set({ refundedCents, status }).where(eq(orders.id, order.id));
+        const [payment] = await tx.insert(payments).values({
+          orderId: order.id, kind: 'refund', providerId: event.id, amountCents: extra, status: 'succeeded',
+          reason: 'Refunded at the payment provider', idempotencyKey: `provider-event:${event.id}`,
+        }).onConflictDoNothing().returning();
+        if (payment) await recordRefundAllocation(tx, { orderId: order.id, paymentId: payment.id, amountCents: extra, fullLineIds: [] });
+      }
     } else {
       after = { ...before, disputed: true };
       await tx.update(orders).set({ disputed: true }).where(eq(orders.id, order.id));

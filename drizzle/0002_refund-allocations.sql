@@ -1,0 +1,22 @@
+CREATE TABLE "refund_lines" (
+	"id" serial PRIMARY KEY NOT NULL,
+	"payment_id" integer NOT NULL,
+	"order_line_id" integer NOT NULL,
+	"wood_cents" integer NOT NULL,
+	"services_cents" integer NOT NULL,
+	"tax_cents" integer NOT NULL,
+	CONSTRAINT "refund_lines_amounts_not_negative" CHECK ("refund_lines"."wood_cents" >= 0 and "refund_lines"."services_cents" >= 0 and "refund_lines"."tax_cents" >= 0)
+);
+--> statement-breakpoint
+ALTER TABLE "order_lines" ADD COLUMN "tax_cents" integer DEFAULT 0 NOT NULL;--> statement-breakpoint
+ALTER TABLE "refund_lines" ADD CONSTRAINT "refund_lines_payment_id_payments_id_fk" FOREIGN KEY ("payment_id") REFERENCES "public"."payments"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "refund_lines" ADD CONSTRAINT "refund_lines_order_line_id_order_lines_id_fk" FOREIGN KEY ("order_line_id") REFERENCES "public"."order_lines"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+CREATE INDEX "refund_lines_payment_idx" ON "refund_lines" USING btree ("payment_id");--> statement-breakpoint
+CREATE INDEX "refund_lines_line_idx" ON "refund_lines" USING btree ("order_line_id");--> statement-breakpoint
+-- Backfill: lines refunded before allocations existed give back their full wood and services, against the order's first refund.
+INSERT INTO "refund_lines" ("payment_id", "order_line_id", "wood_cents", "services_cents", "tax_cents")
+SELECT (SELECT p."id" FROM "payments" p WHERE p."order_id" = l."order_id" AND p."kind" = 'refund' AND p."status" = 'succeeded' ORDER BY p."id" LIMIT 1),
+       l."id", l."slab_cents", l."services_cents", 0
+  FROM "order_lines" l
+ WHERE l."status" = 'refunded'
+   AND EXISTS (SELECT 1 FROM "payments" p WHERE p."order_id" = l."order_id" AND p."kind" = 'refund' AND p."status" = 'succeeded');
