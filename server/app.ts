@@ -14,6 +14,7 @@ import { sameOriginOnly } from './lib/same-origin';
 import { writeLimit } from './lib/write-limit';
 import { catalogueRoutes } from './modules/slabs/catalogue.routes';
 import { accountRoutes } from './modules/accounts/accounts.routes';
+import { preferenceRoutes } from './modules/accounts/preferences.routes';
 import { holdRoutes } from './modules/holds/holds.routes';
 import { checkoutRoutes } from './modules/checkout/checkout.routes';
 import { pickupRoutes } from './modules/pickups/pickups.routes';
@@ -25,6 +26,7 @@ import { yardSlabRoutes } from './modules/slabs/yard-slabs.routes';
 import { officeRoutes } from './modules/office/office.routes';
 import { millRulesRoutes } from './modules/mill-rules/mill-rules.routes';
 import { readingRoutes } from './modules/readings/readings.routes';
+import { buyerListRoutes } from './modules/buyer-lists/buyer-lists.routes';
 import { shopAddressRoutes } from './modules/shop-address/shop-address.routes';
 
 export type AppDeps = {
@@ -90,7 +92,9 @@ export function createApp(deps: AppDeps) {
   api.get('/health', (_req, res) => { res.json({ ok: true }); });
   api.use(catalogueRoutes(deps));
   api.use(accountRoutes(deps));
+  api.use(preferenceRoutes(deps));
   api.use(holdRoutes(deps));
+  api.use(buyerListRoutes(deps));
   api.use(checkoutRoutes(deps));
   api.use(pickupRoutes(deps));
   api.use(photoRoutes(deps));

@@ -43,6 +43,14 @@ export const changePasswordSchema = z
   .refine((v) => v.newPassword === v.confirmPassword, { path: ['confirmPassword'], message: 'The two new passwords differ' });
 export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;
 
+export const updateNameSchema = z.object({
+  name: z.string().trim().min(1, 'Enter your name').max(NAME_MAX, `Use at most ${NAME_MAX} characters`),
+});
+export type UpdateNameInput = z.infer<typeof updateNameSchema>;
+
+export const changeEmailSchema = z.object({ newEmail: email });
+export type ChangeEmailInput = z.infer<typeof changeEmailSchema>;
+
 export const forgotPasswordSchema = z.object({ email });
 export type ForgotPasswordInput = z.infer<typeof forgotPasswordSchema>;
 

@@ -1,4 +1,4 @@
-import { lifting, NIOSH_LOAD_CONSTANT_LB } from './wood/index';
+import { lifting, WOOD_LIMITS } from './wood/index';
 
 /**
  * What to bring to the yard, from the order's slabs. Bed lengths and payloads are typical
@@ -50,7 +50,7 @@ export function loadingAdvice(slabs: LoadingSlab[], { loadingHelp = false } = {}
   const totalWeightLb = slabs.reduce((t, s) => t + s.weightLb, 0);
   const longestSlabIn = Math.max(...slabs.map((s) => s.lengthIn));
   const heaviestSlabLb = Math.max(...slabs.map((s) => s.weightLb));
-  const lift = lifting({ weightLb: Math.max(heaviestSlabLb, 1) });
+  const lift = lifting({ weightLb: Math.min(Math.max(heaviestSlabLb, 1), WOOD_LIMITS.weightLb) });
   const straps = Math.max(2, Math.ceil(longestSlabIn / 48));
   const bring = [
     `${straps} ratchet straps (or more) rated well above the load`,
@@ -58,9 +58,11 @@ export function loadingAdvice(slabs: LoadingSlab[], { loadingHelp = false } = {}
     'Gloves with a good grip, and closed-toe boots',
   ];
   if (longestSlabIn > BED_LENGTHS_IN.standard) bring.push('A red flag or light for anything sticking out behind the vehicle');
-  const millHelpRecommended = lift.needsEquipment || lift.peopleNeeded > 2;
+  const millHelpRecommended = lift.needsEquipment;
   if (!loadingHelp) {
-    bring.push(`${lift.peopleNeeded} ${lift.peopleNeeded === 1 ? 'person' : 'people'} to lift the heaviest slab (about ${Math.round(heaviestSlabLb)} lb)`);
+    bring.push(lift.needsEquipment
+      ? `Ask for the mill's loading help: the heaviest slab (about ${lift.weightLb} lb) is too heavy to carry by hand and goes on with the yard's cart or forklift`
+      : `${lift.peopleNeeded} ${lift.peopleNeeded === 1 ? 'person' : 'people'} to lift the heaviest slab (about ${lift.weightLb} lb)`);
   }
   return {
     slabCount: slabs.length,
@@ -74,8 +76,8 @@ export function loadingAdvice(slabs: LoadingSlab[], { loadingHelp = false } = {}
     millHelpRecommended,
     liftingMessage: lift.message,
     caution:
-      `Slabs are heavy, awkward and can shift. Plan the lift before you start, keep your back straight and the load close, ` +
-      `and share anything over ${NIOSH_LOAD_CONSTANT_LB} lb between people (the load constant of the NIOSH lifting equation). ` +
-      'Tie the load down before you drive. Follow your local rules on lifting and on securing loads.',
+      'Slabs are heavy, awkward and can shift. Plan the lift before you start, keep your back straight and the load close, ' +
+      `and never carry by hand more than the advice above allows. ${lift.basis} Forklifts and hoists are run by trained operators only; ` +
+      'stand clear of a raised load. Tie the load down before you drive. Follow your local rules on lifting and on securing loads.',
   };
 }

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { SAWING_METHODS, type SlabStatus } from './slabs';
+import { inchesInput } from './measure-input';
 
 /** Limits for a log record; a log longer than 100 ft or wider than 10 ft is a typing slip. */
 export const LOG_LIMITS = { maxLengthIn: 1200, maxDiameterIn: 120, maxNoteChars: 1000 } as const;
@@ -16,8 +17,6 @@ const isoDate = (label: string) =>
   z.string().regex(/^\d{4}-\d{2}-\d{2}$/, `${label} must be a date (YYYY-MM-DD)`)
     .refine(isRealDate, `${label} is not a real date`);
 
-const inches = (label: string, max: number) =>
-  z.number({ error: `${label} must be a number` }).positive(`${label} must be greater than 0`).max(max, `${label} must be at most ${max} in`);
 
 const logFields = z.object({
   speciesSlug: z.string({ error: 'Choose a species' }).regex(/^[a-z0-9-]{1,60}$/, 'Choose a species'),
@@ -25,9 +24,9 @@ const logFields = z.object({
   originNote: z.string().max(LOG_LIMITS.maxNoteChars, 'Keep the origin note under 1000 characters').optional(),
   felledOn: isoDate('Felled date').nullable().optional(),
   milledOn: isoDate('Milled date').nullable().optional(),
-  lengthIn: inches('Length', LOG_LIMITS.maxLengthIn),
-  buttDiameterIn: inches('Butt diameter', LOG_LIMITS.maxDiameterIn),
-  topDiameterIn: inches('Top diameter', LOG_LIMITS.maxDiameterIn),
+  lengthIn: inchesInput('Length', { max: LOG_LIMITS.maxLengthIn }),
+  buttDiameterIn: inchesInput('Butt diameter', { max: LOG_LIMITS.maxDiameterIn }),
+  topDiameterIn: inchesInput('Top diameter', { max: LOG_LIMITS.maxDiameterIn }),
   sawingMethod: z.enum(SAWING_METHODS, { error: `Sawing method must be one of ${SAWING_METHODS.join(', ')}` }),
   notes: z.string().max(LOG_LIMITS.maxNoteChars, 'Keep the notes under 1000 characters').optional(),
 });
@@ -72,4 +71,5 @@ export type LogSlab = {
   widthIn: number; lengthIn: number; boardFeet: number; priceCents: number; yardStack: string;
 };
 
-export type LogDetail = LogSummary & { slabs: LogSlab[] };
+/** `targetMcPercent`: the mill's drying target, which the cut plan dries its slabs to. */
+export type LogDetail = LogSummary & { slabs: LogSlab[]; targetMcPercent: number };

@@ -18,6 +18,17 @@ export const PHOTO_LIMITS = {
 } as const;
 
 /** What the file picker offers; the server decides by the file's bytes, not by this list. */
+/** Which side of a slab a photo shows; the database CHECK on slab_photos.view lists the same keys. */
+export const PHOTO_VIEWS = ['top-face', 'bottom-face', 'end-grain', 'edge', 'defect'] as const;
+export type PhotoView = (typeof PHOTO_VIEWS)[number];
+export const PHOTO_VIEW_LABELS: Record<PhotoView, string> = {
+  'top-face': 'Top face',
+  'bottom-face': 'Bottom face',
+  'end-grain': 'End grain',
+  edge: 'Edge',
+  defect: 'Defect close-up',
+};
+
 export const PHOTO_ACCEPT = 'image/jpeg,image/png,image/webp,image/heic';
 export const PHOTO_FIELD = 'photos';
 
@@ -26,6 +37,7 @@ export const updatePhotoSchema = z
     isCover: z.literal(true, { error: 'To change the cover, make another photo the cover' }),
     isIllustration: z.boolean({ error: 'Illustration must be true or false' }),
     altText: z.string().trim().max(PHOTO_LIMITS.maxAltText, `Keep the description under ${PHOTO_LIMITS.maxAltText} characters`),
+    view: z.enum(PHOTO_VIEWS, { error: 'Choose what the photo shows from the list' }).nullable(),
   })
   .partial()
   .strict()
@@ -44,7 +56,7 @@ export type ReorderPhotosInput = z.infer<typeof reorderPhotosSchema>;
 
 export type YardPhotoView = {
   id: number; displayUrl: string; thumbUrl: string; width: number; height: number;
-  position: number; isCover: boolean; isIllustration: boolean; altText: string; createdAt: string;
+  position: number; isCover: boolean; isIllustration: boolean; altText: string; view: PhotoView | null; createdAt: string;
 };
 
 export type YardPhotoList = { slabId: number; items: YardPhotoView[]; maxPerSlab: number };

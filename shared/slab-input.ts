@@ -1,5 +1,7 @@
+import type { DryingForecast } from './wood/index';
 import { z } from 'zod';
 import { LIVE_EDGE, SLAB_STATUSES, type SlabStatus } from './slabs';
+import { inchesInput } from './measure-input';
 
 export const DEFECT_KINDS = ['check', 'bark-inclusion', 'void', 'insect-holes', 'other'] as const;
 export const DEFECT_LABELS: Record<(typeof DEFECT_KINDS)[number], string> = {
@@ -51,8 +53,6 @@ export function canStaffMove(from: SlabStatus, to: SlabStatus): boolean {
 export const staffStatusChoices = (from: SlabStatus): SlabStatus[] =>
   [from, ...SLAB_TRANSITIONS[from].filter((to) => canStaffMove(from, to))];
 
-const inches = (label: string, max: number) =>
-  z.number({ error: `${label} must be a number` }).positive(`${label} must be greater than 0`).max(max, `${label} must be at most ${max} in`);
 
 const shortText = (label: string, max: number) => z.string().max(max, `${label}: keep it under ${max} characters`);
 
@@ -66,11 +66,11 @@ export const defectSchema = z.object({
 const slabFields = z.object({
   logId: z.number({ error: 'Choose the log this slab came from' }).int().positive('Choose the log this slab came from'),
   sequenceInLog: z.number({ error: 'Sequence must be a number' }).int('Sequence must be a whole number').min(1, 'Sequence starts at 1').max(999),
-  thicknessIn: inches('Thickness', SLAB_LIMITS.maxThicknessIn),
-  widthsIn: z.array(inches('Width', SLAB_LIMITS.maxWidthIn), { error: 'Measure the width at 2 to 8 stations' })
+  thicknessIn: inchesInput('Thickness', { max: SLAB_LIMITS.maxThicknessIn, thickness: true }),
+  widthsIn: z.array(inchesInput('Width', { max: SLAB_LIMITS.maxWidthIn }), { error: 'Measure the width at 2 to 8 stations' })
     .min(SLAB_LIMITS.minStations, 'Measure the width at 2 to 8 stations along the slab')
     .max(SLAB_LIMITS.maxStations, 'Measure the width at no more than 8 stations'),
-  lengthIn: inches('Length', SLAB_LIMITS.maxLengthIn),
+  lengthIn: inchesInput('Length', { max: SLAB_LIMITS.maxLengthIn }),
   liveEdge: z.enum(LIVE_EDGE, { error: 'Live edge must be none, one or both' }),
   figures: z.array(figureSlugSchema).max(SLAB_LIMITS.maxFigures, 'Up to 10 figures'),
   figureNotes: shortText('Figure notes', 1000),
@@ -129,6 +129,7 @@ export type BulkResult = { id: number; ok: boolean; status?: SlabStatus; code?: 
 export const YARD_SORTS = [
   'code', 'species', 'log', 'sequenceInLog', 'status', 'dryingState', 'thicknessIn', 'widthIn', 'lengthIn',
   'boardFeet', 'priceCents', 'yardStack', 'moisturePercent', 'photoCount', 'createdAt', 'updatedAt', 'listedAt',
+  'airDryExpectedOn',
 ] as const;
 export type YardSort = (typeof YARD_SORTS)[number];
 
@@ -161,7 +162,10 @@ export type YardSlabRow = {
   yardStack: string; yardPosition: string; liveEdge: string; figures: string[];
   moisturePercent: number | null; lastReadingOn: string | null; photoCount: number;
   createdAt: string; updatedAt: string; listedAt: string | null;
+  /** When the slab should reach the air-dry line, from its readings (or the rule of thumb); null until worked out. */
+  airDry: YardDryingForecast | null;
 };
+export type YardDryingForecast = Pick<DryingForecast, 'expectedOn' | 'earliestOn' | 'latestOn' | 'basis' | 'method'>;
 export type YardSlabPage = { items: YardSlabRow[]; total: number; page: number; pageSize: number; counts: Record<SlabStatus, number> };
 
 /** A slab as the staff form edits it. */

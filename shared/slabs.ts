@@ -1,7 +1,13 @@
+import type { DryingForecast, LiftingAdvice } from './wood/index';
 import { z } from 'zod';
+import { parseInches } from './wood/format';
 
 export const SLAB_STATUSES = ['drying', 'ready', 'listed', 'held', 'sold', 'picked-up', 'withdrawn'] as const;
 export type SlabStatus = (typeof SLAB_STATUSES)[number];
+
+/** A slab in these statuses has been paid for: its price is the one its sale recorded, never recomputed. */
+export const SOLD_STATUSES: readonly SlabStatus[] = ['sold', 'picked-up'];
+export const isSold = (status: string) => (SOLD_STATUSES as readonly string[]).includes(status);
 
 /** Statuses a visitor can see in the catalogue and on a slab page. */
 export const PUBLIC_STATUSES: readonly SlabStatus[] = ['drying', 'ready', 'listed', 'held', 'sold', 'picked-up'];
@@ -33,37 +39,57 @@ export const SLAB_SORT_LABELS: Record<(typeof SLAB_SORTS)[number], string> = {
 
 const DRYING_STATE_VALUES = ['green', 'air-drying', 'air-dry', 'shop-dry'] as const;
 
-const optionalNumber = (label: string, min: number, max: number) =>
-  z.coerce
-    .number({ error: `${label} must be a number` })
-    .min(min, `${label} must be at least ${min}`)
-    .max(max, `${label} must be at most ${max}`)
-    .optional();
-
 const emptyToUndefined = (v: unknown) => (v === '' ? undefined : v);
 
-/** Catalogue query: every value arrives as a string from the URL. */
+/**
+ * The catalogue's filter names, as the filter boxes label them: every message about a filter
+ * starts with the words the buyer sees beside it.
+ */
+export const CATALOGUE_FILTER_LABELS = {
+  minThicknessIn: 'Thickness from',
+  maxThicknessIn: 'Thickness to',
+  minLengthIn: 'Length at least',
+  minWidthIn: 'Width at least',
+  maxPriceCents: 'Price up to',
+} as const;
+const L = CATALOGUE_FILTER_LABELS;
+
+const filterInches = (label: string, max: number, thickness = false) =>
+  z.preprocess((v, ctx) => {
+    if (typeof v !== 'string' || v.trim() === '') return v;
+    try {
+      return parseInches(v, { thickness });
+    } catch (e) {
+      ctx.addIssue({ code: 'custom', message: `${label}: ${e instanceof Error ? e.message : 'not a size we can read.'}` });
+      return v;
+    }
+  }, z.number({ error: `${label} must be a size in inches` })
+    .min(0, `${label} cannot be below 0`)
+    .max(max, `${label} must be at most ${max} in`)
+    .optional());
+
+/** Catalogue query: every value arrives as a string from the URL. Sizes may be written "2 1/4" or "8/4". */
 export const slabListQuerySchema = z
   .object({
     species: z.string().regex(/^[a-z0-9-]{1,60}$/, 'Unknown species').optional(),
-    minThicknessIn: optionalNumber('Minimum thickness', 0, 48),
-    maxThicknessIn: optionalNumber('Maximum thickness', 0, 48),
-    minLengthIn: optionalNumber('Minimum length', 0, 1200),
-    minWidthIn: optionalNumber('Minimum width', 0, 240),
-    maxPriceCents: z.coerce.number({ error: 'Maximum price must be a number' }).int('Maximum price must be whole cents').min(0, 'Maximum price cannot be negative').max(100_000_000).optional(),
-    liveEdge: z.enum(['any', ...['none', 'one', 'both', 'yes']] as const, { error: 'Live edge must be any, none, one, both or yes' }).optional(),
-    dryingState: z.enum(DRYING_STATE_VALUES, { error: `Drying state must be one of ${DRYING_STATE_VALUES.join(', ')}` }).optional(),
-    availability: z.enum(['available', 'upcoming', 'all'], { error: 'Availability must be available, upcoming or all' }).default('available'),
+    minThicknessIn: filterInches(L.minThicknessIn, 48, true),
+    maxThicknessIn: filterInches(L.maxThicknessIn, 48, true),
+    minLengthIn: filterInches(L.minLengthIn, 1200),
+    minWidthIn: filterInches(L.minWidthIn, 240),
+    maxPriceCents: z.coerce.number({ error: `${L.maxPriceCents} must be an amount in dollars` }).int(`${L.maxPriceCents} must be whole cents`).min(0, `${L.maxPriceCents} cannot be below $0`).max(100_000_000, `${L.maxPriceCents} is more than any slab costs`).optional(),
+    liveEdge: z.enum(['any', ...['none', 'one', 'both', 'yes']] as const, { error: 'Choose an edge from the list' }).optional(),
+    dryingState: z.enum(DRYING_STATE_VALUES, { error: 'Choose a dryness from the list' }).optional(),
+    availability: z.enum(['available', 'upcoming', 'all'], { error: 'Choose what to show from the list' }).default('available'),
     logId: z.coerce.number().int().positive().optional(),
     q: z.string().max(80, 'Search text is too long').optional(),
-    sort: z.enum(SLAB_SORTS, { error: `Sort must be one of ${SLAB_SORTS.join(', ')}` }).default('newest'),
+    sort: z.enum(SLAB_SORTS, { error: 'Choose a sort order from the list' }).default('newest'),
     page: z.coerce.number({ error: 'Page must be a number' }).int('Page must be a whole number').min(1, 'Page starts at 1').max(100000).default(1),
     pageSize: z.coerce.number({ error: 'Page size must be a number' }).int('Page size must be a whole number').min(1, 'Page size must be 1–100').max(100, 'Page size must be 1–100').default(24),
   })
   .strict()
   .refine((q) => q.minThicknessIn === undefined || q.maxThicknessIn === undefined || q.minThicknessIn <= q.maxThicknessIn, {
     path: ['maxThicknessIn'],
-    message: 'Maximum thickness must not be less than the minimum',
+    message: `${L.minThicknessIn} is more than ${L.maxThicknessIn.toLowerCase()}`,
   });
 
 /** Accepts raw URL params: empty strings are treated as absent. */
@@ -84,7 +110,8 @@ export type SlabListItem = {
   widthIn: number;
   lengthIn: number;
   boardFeet: number;
-  priceCents: number;
+  /** Asking price; for a sold slab the price it sold at, or null when no sale was recorded ("Sold"). */
+  priceCents: number | null;
   status: SlabStatus;
   dryingState: string;
   moisturePercent: number | null;
@@ -104,6 +131,8 @@ export type PriceBreakdownView = { boardFeet: number; lines: PriceLine[]; slabCe
 export type SlabPhotoView = {
   id: number; displayUrl: string; thumbUrl: string; width: number; height: number;
   isCover: boolean; isIllustration: boolean; altText: string; position: number;
+  /** Which side of the slab it shows (PHOTO_VIEWS in shared/photos.ts), or null. */
+  view: string | null;
 };
 
 export type MoistureReadingView = {
@@ -113,7 +142,7 @@ export type MoistureReadingView = {
 
 export type LogNeighbour = {
   id: number; code: string; sequenceInLog: number; status: SlabStatus; thicknessIn: number;
-  widthIn: number; lengthIn: number; priceCents: number; coverThumbUrl: string | null; isThisSlab: boolean;
+  widthIn: number; lengthIn: number; priceCents: number | null; coverThumbUrl: string | null; isThisSlab: boolean;
 };
 
 export type SlabDetail = Omit<SlabListItem, 'species'> & {
@@ -131,15 +160,27 @@ export type SlabDetail = Omit<SlabListItem, 'species'> & {
   photos: SlabPhotoView[];
   moistureReadings: MoistureReadingView[];
   neighbours: LogNeighbour[];
-  priceBreakdown: PriceBreakdownView;
-  /** Estimated weight at the latest reading (or at the mill's air-dry assumption when none). */
+  /** How the price is worked out; for a sold slab the breakdown recorded at its sale (null when none was). */
+  priceBreakdown: PriceBreakdownView | null;
+  /** Estimated weight at the latest reading, or at the species' typical green MC when there is none. */
   weightLb: number;
   weightAtMcPercent: number;
-  lifting: { peopleNeeded: number; needsEquipment: boolean; message: string };
+  /** Whether the weight uses a reading or the typical green MC, and a sentence saying so. */
+  weightBasis: 'reading' | 'typical-green';
+  weightNote: string;
+  lifting: LiftingAdvice;
+  /** When the slab should reach the air-dry line, from its own readings (or the rule of thumb). */
+  dryingForecast: DryingForecast;
   airDryReadyOn: string | null;
   targetMcPercent: number;
   flatteningPriceCents: number;
 };
+
+/** The price as a buyer reads it: "$1,234.00", "Sold for $1,234.00", or just "Sold". */
+export function priceWords(status: string, priceCents: number | null, format: (cents: number) => string): string {
+  if (!isSold(status)) return priceCents === null ? '' : format(priceCents);
+  return priceCents === null ? 'Sold' : `Sold for ${format(priceCents)}`;
+}
 
 /** What each status means to a buyer, in Stickerline's words. */
 export const STATUS_LABELS: Record<SlabStatus, string> = {

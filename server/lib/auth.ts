@@ -5,7 +5,7 @@ import { adminAc, userAc } from 'better-auth/plugins/admin/access';
 import type { Db } from '../db/client';
 import * as schema from '../db/schema/index';
 import type { Mailer } from './mail';
-import { passwordResetEmail } from './email-templates';
+import { emailChangeEmail, passwordResetEmail } from './email-templates';
 
 export const ROLES = ['buyer', 'seller', 'admin'] as const;
 export type Role = (typeof ROLES)[number];
@@ -43,6 +43,15 @@ export function createAuth({ db, secret, baseURL, trustedOrigins, mailer, signIn
       revokeSessionsOnPasswordReset: true,
       sendResetPassword: async ({ user, url }) => {
         await mailer.send({ to: user.email, ...passwordResetEmail({ name: user.name, url }) });
+      },
+    },
+    // A new e-mail counts only once its owner clicks the link sent to it; until then the old one stays.
+    user: { changeEmail: { enabled: true } },
+    emailVerification: {
+      sendOnSignUp: false,
+      expiresIn: 24 * 3600,
+      sendVerificationEmail: async ({ user, url }) => {
+        await mailer.send({ to: user.email, ...emailChangeEmail({ name: user.name, newEmail: user.email, url }) });
       },
     },
     plugins: [

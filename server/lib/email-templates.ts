@@ -119,3 +119,41 @@ export function pickupRescheduledEmail(r: { name: string; code: string; pickup: 
     ],
   );
 }
+
+// --- buyers' own requests ---------------------------------------------------------------------
+
+export function holdPlacedEmail({ name, slabs, until, url }: { name: string; slabs: { code: string; speciesName: string }[]; until: string; url: string }): EmailContent {
+  const many = slabs.length > 1;
+  return layout(
+    many ? `${slabs.length} slabs are held for you` : `Slab ${slabs[0]?.code ?? ''} is held for you`,
+    [
+      `Hello ${name},`,
+      `${many ? 'These slabs are' : 'This slab is'} set aside for you until ${until}:\n${slabs.map((s) => `• ${s.code} — ${s.speciesName}`).join('\n')}`,
+      'Pay and choose a pickup time before then. If you change your mind, release the hold so another woodworker can have it.',
+    ],
+    { label: 'See your holds', url },
+  );
+}
+
+export function slabFreeAgainEmail({ name, code, speciesName, url }: { name: string; code: string; speciesName: string; url: string }): EmailContent {
+  return layout(
+    `Slab ${code} is for sale again`,
+    [
+      `Hello ${name},`,
+      `You asked us to tell you when slab ${code} (${speciesName}) came free. The hold on it has ended and it is for sale again.`,
+      'Slabs are one of a kind and go to whoever reserves first, so do not wait too long.',
+    ],
+    { label: `See slab ${code}`, url },
+  );
+}
+
+export function emailChangeEmail({ name, newEmail, url }: { name: string; newEmail: string; url: string }): EmailContent {
+  return layout(
+    'Confirm your new e-mail for Stickerline',
+    [
+      `Hello ${name},`,
+      `Someone asked to use ${newEmail} for a Stickerline account. If it was you, confirm with the link below; until then the account keeps its old address. If not, you can ignore this message.`,
+    ],
+    { label: 'Confirm this e-mail', url },
+  );
+}

@@ -1,4 +1,5 @@
-import { requireInRange, requireNonNegative, requirePositive } from './errors';
+import { requireAtMost, requireInRange, requireNonNegative, requireSize } from './errors';
+import { WOOD_LIMITS } from './limits';
 import { dimensionalChangeIn } from './shrinkage';
 import { DEFAULT_MIN_FINISHED_THICKNESS_IN, DEFAULT_PASS_DEPTH_IN } from './flattening';
 import { FIBER_SATURATION_MC } from './moisture';
@@ -69,10 +70,12 @@ export function cutPlan(input: CutPlanInput): CutPlan {
     diameterIn, greenThicknessIn, kerfIn = CHAINSAW_KERF_IN, speciesSlug, sawingMethod,
     flattenAllowanceIn = DEFAULT_FLATTEN_ALLOWANCE_IN, dryToMcPercent = 8,
   } = input;
-  requirePositive(diameterIn, 'diameterIn');
-  requirePositive(greenThicknessIn, 'greenThicknessIn');
+  requireSize(diameterIn, 'diameterIn', WOOD_LIMITS.diameterIn);
+  requireSize(greenThicknessIn, 'greenThicknessIn', WOOD_LIMITS.thicknessIn);
   requireNonNegative(kerfIn, 'kerfIn');
+  requireAtMost(kerfIn, 'kerfIn', WOOD_LIMITS.kerfIn, 'in');
   requireNonNegative(flattenAllowanceIn, 'flattenAllowanceIn');
+  requireAtMost(flattenAllowanceIn, 'flattenAllowanceIn', WOOD_LIMITS.thicknessIn, 'in');
   requireInRange(dryToMcPercent, 'dryToMcPercent', 0, FIBER_SATURATION_MC);
 
   const r = diameterIn / 2;

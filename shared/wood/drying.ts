@@ -1,4 +1,5 @@
-import { requireInRange, requirePositive, WoodMathError } from './errors';
+import { requireInRange, requireSize, WoodMathError } from './errors';
+import { WOOD_LIMITS } from './limits';
 import { FIBER_SATURATION_MC, requireMoistureContent } from './moisture';
 
 export type DryingState = 'green' | 'air-drying' | 'air-dry' | 'shop-dry';
@@ -23,13 +24,26 @@ export const DRYING_STATES: ReadonlyArray<{ state: DryingState; label: string; d
     description: 'Dried down to the mill\'s target for indoor furniture, so it will move little once it is inside.' },
 ];
 
+/** A date for the drying math: a Date or 'YYYY-MM-DD' (UTC), within the years Stickerline handles. */
+export function parseWoodDate(value: Date | string, field: string): Date {
+  let date: Date;
+  if (value instanceof Date) date = new Date(value.getTime());
+  else if (typeof value === 'string' && /^\d{4}-\d{2}-\d{2}$/.test(value)) {
+    date = new Date(`${value}T00:00:00Z`);
+    if (!Number.isNaN(date.getTime()) && date.toISOString().slice(0, 10) !== value) date = new Date(Number.NaN); // 2024-02-31
+  } else date = typeof value === 'string' ? new Date(value) : new Date(Number.NaN);
+  if (Number.isNaN(date.getTime())) throw new WoodMathError(`${field} is not a valid date (got ${String(value)})`, field);
+  const year = date.getUTCFullYear();
+  if (year < WOOD_LIMITS.minYear || year > WOOD_LIMITS.maxYear) {
+    throw new WoodMathError(`${field} must fall between ${WOOD_LIMITS.minYear} and ${WOOD_LIMITS.maxYear} (got ${String(value)})`, field);
+  }
+  return date;
+}
+
 /** One year of air drying per inch of thickness (common practice), counted in calendar months. */
 export function airDryReadyDate({ milledOn, thicknessIn }: AirDryInput): Date {
-  requirePositive(thicknessIn, 'thicknessIn');
-  const start = milledOn instanceof Date ? new Date(milledOn.getTime()) : new Date(milledOn);
-  if (Number.isNaN(start.getTime())) {
-    throw new WoodMathError(`milledOn is not a valid date (got ${String(milledOn)})`, 'milledOn');
-  }
+  requireSize(thicknessIn, 'thicknessIn', WOOD_LIMITS.thicknessIn);
+  const start = parseWoodDate(milledOn, 'milledOn');
   const months = Math.ceil(thicknessIn * 12 - 1e-9);
   const day = start.getUTCDate();
   const ready = new Date(start.getTime());

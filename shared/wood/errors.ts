@@ -45,3 +45,23 @@ export function requireWholeNonNegative(value: number, field: string): number {
   if (!Number.isInteger(value)) throw new WoodMathError(`${field} must be a whole number (got ${value})`, field);
   return value;
 }
+
+export function requireAtMost(value: number, field: string, max: number, what = ''): number {
+  requireFinite(value, field);
+  if (value > max) {
+    throw new WoodMathError(`${field} must be at most ${max}${what ? ` ${what}` : ''} (got ${value})`, field);
+  }
+  return value;
+}
+
+/** A positive size no larger than a sane maximum for that input (see limits.ts). */
+export function requireSize(value: number, field: string, max: number): number {
+  requirePositive(value, field);
+  return requireAtMost(value, field, max);
+}
+
+/** Whole cents from 0 up to a sane maximum (see limits.ts). */
+export function requireCents(value: number, field: string, max: number): number {
+  requireWholeNonNegative(value, field);
+  return requireAtMost(value, field, max, 'cents');
+}

@@ -1,4 +1,5 @@
-import { requireNonNegative, requirePositive } from './errors';
+import { requireAtMost, requireInRange, requireNonNegative, requireSize } from './errors';
+import { WOOD_LIMITS } from './limits';
 import { roundHalfAwayFromZero } from './rounding';
 
 export type FlatteningInput = {
@@ -12,8 +13,14 @@ export type FlatteningInput = {
 };
 
 export type FlatteningEstimate = {
+  /** Depth actually cut from each face: its passes × the pass depth. */
   removedPerFaceIn: { first: number; second: number };
+  /** Passes on each face. */
+  passesPerFace: { first: number; second: number };
+  passDepthIn: number;
+  /** Starting thickness minus everything the passes remove. */
   finishedThicknessIn: number;
+  /** All passes, both faces. */
   passes: number;
   faceAreaSqFt: number;
   feasible: boolean;
@@ -27,8 +34,8 @@ export const DEFAULT_MIN_FINISHED_THICKNESS_IN = 1;
 
 /** Area of one face in square feet: W × L ÷ 144. */
 export function faceAreaSqFt(widthIn: number, lengthIn: number): number {
-  requirePositive(widthIn, 'widthIn');
-  requirePositive(lengthIn, 'lengthIn');
+  requireSize(widthIn, 'widthIn', WOOD_LIMITS.widthIn);
+  requireSize(lengthIn, 'lengthIn', WOOD_LIMITS.lengthIn);
   return (widthIn * lengthIn) / 144;
 }
 
@@ -37,7 +44,8 @@ export function faceAreaSqFt(widthIn: number, lengthIn: number): number {
  * face is cut flat down to its low spot, the second face still carries the same
  * deviation and loses as much again ("flattening costs twice the cup"). Each
  * face also gets at least one pass, because a sawn face needs cleaning up.
- * Passes are counted per face and summed.
+ * The sled cuts whole passes, so each face loses passes × pass depth, and the
+ * finished thickness is what those passes leave: passes × pass depth = stock removed.
  */
 export function flatteningEstimate(input: FlatteningInput): FlatteningEstimate {
   const {
@@ -45,18 +53,22 @@ export function flatteningEstimate(input: FlatteningInput): FlatteningEstimate {
     passDepthIn = DEFAULT_PASS_DEPTH_IN,
     minFinishedThicknessIn = DEFAULT_MIN_FINISHED_THICKNESS_IN,
   } = input;
-  requirePositive(thicknessIn, 'thicknessIn');
+  requireSize(thicknessIn, 'thicknessIn', WOOD_LIMITS.thicknessIn);
   requireNonNegative(deviationIn, 'deviationIn');
-  requirePositive(passDepthIn, 'passDepthIn');
-  requirePositive(minFinishedThicknessIn, 'minFinishedThicknessIn');
+  requireAtMost(deviationIn, 'deviationIn', WOOD_LIMITS.deviationIn, 'in');
+  requireInRange(passDepthIn, 'passDepthIn', WOOD_LIMITS.minPassDepthIn, WOOD_LIMITS.maxPassDepthIn);
+  requireSize(minFinishedThicknessIn, 'minFinishedThicknessIn', WOOD_LIMITS.thicknessIn);
   const area = faceAreaSqFt(widthIn, lengthIn);
 
   const perFace = Math.max(deviationIn, passDepthIn);
   // 1e-9 keeps 0.3 / 0.1 = 3.0000000000000004 from counting as 4 passes
   const passesPerFace = Math.ceil(perFace / passDepthIn - 1e-9);
-  const finished = Math.max(0, thicknessIn - 2 * perFace);
+  const removedPerFace = passesPerFace * passDepthIn;
+  const finished = Math.max(0, thicknessIn - 2 * removedPerFace);
   const estimate: FlatteningEstimate = {
-    removedPerFaceIn: { first: perFace, second: perFace },
+    removedPerFaceIn: { first: removedPerFace, second: removedPerFace },
+    passesPerFace: { first: passesPerFace, second: passesPerFace },
+    passDepthIn,
     finishedThicknessIn: finished,
     passes: passesPerFace * 2,
     faceAreaSqFt: area,

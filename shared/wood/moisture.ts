@@ -1,4 +1,4 @@
-import { requireFinite, requireInRange, requirePositive, WoodMathError } from './errors';
+import { requireAtMost, requireFinite, requireInRange, requirePositive, WoodMathError } from './errors';
 
 /** Average fiber saturation point, % MC (USDA FPL Wood Handbook FPL-GTR-190, p. 4-2). */
 export const FIBER_SATURATION_MC = 30;
@@ -62,19 +62,33 @@ export function equilibriumMoistureContentC({ temperatureC, relativeHumidityPerc
 export function moistureContentPercent({ wetMass, ovenDryMass }: MoistureContentInput): number {
   requireFinite(wetMass, 'wetMass');
   requirePositive(ovenDryMass, 'ovenDryMass');
+  requireAtMost(wetMass, 'wetMass', MAX_SAMPLE_MASS);
+  requireAtMost(ovenDryMass, 'ovenDryMass', MAX_SAMPLE_MASS);
   if (wetMass < ovenDryMass) {
     throw new WoodMathError(
       `wetMass (${wetMass}) is below ovenDryMass (${ovenDryMass}); moisture content cannot be below 0`,
       'wetMass',
     );
   }
-  return ((wetMass - ovenDryMass) / ovenDryMass) * 100;
+  const mc = ((wetMass - ovenDryMass) / ovenDryMass) * 100;
+  return requireMoistureContent(mc, 'wetMass');
 }
 
-/** Shared check for an MC input: 0 or more (oven-dry basis has no upper limit). */
+/** Largest sample mass accepted, in whatever unit both masses share. */
+export const MAX_SAMPLE_MASS = 1e9;
+
+/**
+ * Shared check for an MC input with no species named: 0 % up to the most water even a very light
+ * wood can hold (ABSOLUTE_MAX_MOISTURE_CONTENT_PERCENT). Inputs that name a species are checked
+ * against that species' own maximum (requireSpeciesMoistureContent in species.ts).
+ */
 export function requireMoistureContent(value: number, field: string): number {
   requireFinite(value, field);
   if (value < 0) throw new WoodMathError(`${field} must be 0 % or more (got ${value})`, field);
+  if (value > ABSOLUTE_MAX_MOISTURE_CONTENT_PERCENT) {
+    throw new WoodMathError(
+      `${field} ${value} % is more water than any wood can hold (at most about ${Math.floor(ABSOLUTE_MAX_MOISTURE_CONTENT_PERCENT)} %)`, field);
+  }
   return value;
 }
 
@@ -90,3 +104,9 @@ export function maxMoistureContentPercent(basicSpecificGravity: number): number 
   requireInRange(basicSpecificGravity, 'basicSpecificGravity', 0.1, 1.4);
   return (100 * (CELL_WALL_SPECIFIC_GRAVITY - basicSpecificGravity)) / (CELL_WALL_SPECIFIC_GRAVITY * basicSpecificGravity);
 }
+
+/**
+ * The most water any wood can hold: the maximum-moisture equation at a basic specific gravity of
+ * 0.10, lighter than the lightest commercial timbers (about 935 % MC).
+ */
+export const ABSOLUTE_MAX_MOISTURE_CONTENT_PERCENT = (100 * (CELL_WALL_SPECIFIC_GRAVITY - 0.1)) / (CELL_WALL_SPECIFIC_GRAVITY * 0.1);

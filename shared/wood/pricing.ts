@@ -1,7 +1,8 @@
 import { boardFeet, roundBoardFeet } from './board-feet';
-import { requireFinite, requireWholeNonNegative, WoodMathError } from './errors';
+import { requireCents, requireInRange, WoodMathError } from './errors';
 import { faceAreaSqFt } from './flattening';
-import { roundCents } from './rounding';
+import { WOOD_LIMITS } from './limits';
+import { roundCents, roundHalfAwayFromZero } from './rounding';
 
 export type PricingRules = {
   /** Multiplier per figure slug; a slab gets only its largest one. */
@@ -44,9 +45,22 @@ export type SlabPriceBreakdown = {
 };
 
 const dollars = (cents: number) => `$${(cents / 100).toFixed(2)}`;
+/** A premium multiplier as the percentage printed on its line (up to 2 decimals), so the line multiplies out. */
+const premiumPercent = (multiplier: number) => roundHalfAwayFromZero((multiplier - 1) * 100, 2);
+/** A premium line: "<what>, P % of $base", whose amount is exactly P % of the base, rounded to the cent once. */
+function premiumLine(code: 'figure' | 'thickness', what: string, multiplier: number, base: number): PriceLine {
+  const percent = premiumPercent(multiplier);
+  return { code, label: `${what}: ${percent} % of ${dollars(base)}`, amountCents: roundCents((base * percent) / 100) };
+}
+/** Face area as printed on the flattening line: square feet to 2 decimals. */
+export const roundSqFt = (sqFt: number) => roundHalfAwayFromZero(sqFt, 2);
 const sum = (lines: PriceLine[]) => lines.reduce((total, line) => total + line.amountCents, 0);
 
 /**
+ * Every line whose label shows a multiplication (bd ft × rate, P % of base, sq ft × rate) uses the
+ * printed figures, so a buyer multiplying the label out gets the amount to the cent.
+ * Flattening covers both faces and is charged on the area of one face.
+ *
  * Rounding rule: each line is rounded half away from zero to whole cents once,
  * when it is made; slab, flattening and total are sums of rounded lines.
  * The base uses the 2-decimal board feet the buyer sees, so the tag's
@@ -60,7 +74,7 @@ const sum = (lines: PriceLine[]) => lines.reduce((total, line) => total + line.a
 export function slabPriceBreakdown(input: SlabPriceInput): SlabPriceBreakdown {
   const { thicknessIn, widthIn, lengthIn, ratePerBoardFootCents } = input;
   const rules = input.rules ?? DEFAULT_PRICING_RULES;
-  requireWholeNonNegative(ratePerBoardFootCents, 'ratePerBoardFootCents');
+  requireCents(ratePerBoardFootCents, 'ratePerBoardFootCents', WOOD_LIMITS.rateCents);
   const bf = roundBoardFeet(boardFeet({ thicknessIn, widthIn, lengthIn }));
 
   const base = roundCents(bf * ratePerBoardFootCents);
@@ -72,29 +86,27 @@ export function slabPriceBreakdown(input: SlabPriceInput): SlabPriceBreakdown {
   for (const slug of input.figures ?? []) {
     const multiplier = rules.figurePremiums[slug];
     if (multiplier === undefined) continue; // a figure with no premium costs nothing extra
-    requireFinite(multiplier, `rules.figurePremiums.${slug}`);
-    if (multiplier > 1 && (!best || multiplier > best.multiplier)) best = { slug, multiplier };
+    requireInRange(multiplier, `rules.figurePremiums.${slug}`, 0, WOOD_LIMITS.maxMultiplier);
+    if (premiumPercent(multiplier) > 0 && (!best || multiplier > best.multiplier)) best = { slug, multiplier };
   }
-  if (best) {
-    lines.push({ code: 'figure', label: `Figure: ${best.slug} (×${best.multiplier})`,
-      amountCents: roundCents(base * (best.multiplier - 1)) });
-  }
+  if (best) lines.push(premiumLine('figure', `Figure premium, ${best.slug}`, best.multiplier, base));
 
   const thick = rules.thickPremium;
-  if (thicknessIn >= thick.minThicknessIn && thick.multiplier !== 1) {
-    lines.push({ code: 'thickness', label: `Thick stock, ${thick.minThicknessIn} in and over (×${thick.multiplier})`,
-      amountCents: roundCents(base * (thick.multiplier - 1)) });
+  requireInRange(thick.multiplier, 'rules.thickPremium.multiplier', 0, WOOD_LIMITS.maxMultiplier);
+  requireInRange(thick.minThicknessIn, 'rules.thickPremium.minThicknessIn', 0, WOOD_LIMITS.thicknessIn);
+  if (thicknessIn >= thick.minThicknessIn && premiumPercent(thick.multiplier) !== 0) {
+    lines.push(premiumLine('thickness', `Thick stock, ${thick.minThicknessIn} in and over`, thick.multiplier, base));
   }
 
   const computed = sum(lines);
-  requireWholeNonNegative(rules.minimumChargeCents, 'rules.minimumChargeCents');
+  requireCents(rules.minimumChargeCents, 'rules.minimumChargeCents', WOOD_LIMITS.priceCents);
   if (computed < rules.minimumChargeCents) {
     lines.push({ code: 'minimum', label: `Topped up to the ${dollars(rules.minimumChargeCents)} minimum`,
       amountCents: rules.minimumChargeCents - computed });
   }
 
   if (input.overrideCents !== undefined && input.overrideCents !== null) {
-    requireWholeNonNegative(input.overrideCents, 'overrideCents');
+    requireCents(input.overrideCents, 'overrideCents', WOOD_LIMITS.priceCents);
     const reason = input.overrideReason?.trim();
     if (!reason) throw new WoodMathError('overrideReason is required when overrideCents is set', 'overrideReason');
     // The override line is the difference, so the computed lines stay visible and everything still sums.
@@ -105,10 +117,11 @@ export function slabPriceBreakdown(input: SlabPriceInput): SlabPriceBreakdown {
 
   let flatteningCents = 0;
   if (input.withFlattening) {
-    requireWholeNonNegative(rules.flatteningCentsPerSqFt, 'rules.flatteningCentsPerSqFt');
-    const area = faceAreaSqFt(widthIn, lengthIn);
+    requireCents(rules.flatteningCentsPerSqFt, 'rules.flatteningCentsPerSqFt', WOOD_LIMITS.rateCents);
+    const area = roundSqFt(faceAreaSqFt(widthIn, lengthIn));
     flatteningCents = roundCents(area * rules.flatteningCentsPerSqFt);
-    lines.push({ code: 'flattening', label: `Flattening, ${area.toFixed(2)} sq ft × ${dollars(rules.flatteningCentsPerSqFt)}/sq ft`,
+    lines.push({ code: 'flattening',
+      label: `Flattening both faces, charged on one face: ${area.toFixed(2)} sq ft × ${dollars(rules.flatteningCentsPerSqFt)}/sq ft`,
       amountCents: flatteningCents });
   }
 

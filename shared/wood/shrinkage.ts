@@ -1,6 +1,7 @@
-import { requirePositive, WoodMathError } from './errors';
-import { FIBER_SATURATION_MC, requireMoistureContent } from './moisture';
-import { getSpecies } from './species';
+import { requireSize, WoodMathError } from './errors';
+import { WOOD_LIMITS } from './limits';
+import { FIBER_SATURATION_MC } from './moisture';
+import { getSpecies, requireSpeciesMoistureContent } from './species';
 
 export type Grain = 'flatsawn' | 'quartersawn';
 
@@ -15,58 +16,63 @@ export type DimensionalChangeInput = {
 export type DimensionalChangeDetail = {
   /** Signed: negative means the piece gets smaller. */
   changeIn: number;
-  method: 'coefficient' | 'shrinkage-from-green';
+  /** New size ÷ old size. */
+  ratio: number;
+  method: 'shrinkage-from-green';
+  /** Plain-words statement of the model and its source, for the page. */
   note: string;
 };
 
-/** The MC span in which the handbook's linear coefficients hold (WH2010 ch. 13, Table 13-5). */
+/** The span in which the handbook's linear coefficients hold (WH2010 ch. 13, Table 13-5); used for cross-checks only. */
 export const COEFFICIENT_MC_RANGE = { min: 6, max: 14 } as const;
 
-const inCoefficientRange = (mc: number) => mc >= COEFFICIENT_MC_RANGE.min && mc <= COEFFICIENT_MC_RANGE.max;
+/** The one movement model, named for the page. */
+export const MOVEMENT_METHOD_NOTE =
+  'Movement is worked out from the species’ own green-to-oven-dry shrinkage (USDA Wood Handbook Table 4-3), ' +
+  'taken as linear from fiber saturation (about 30 % moisture) down to oven-dry (Wood Handbook Eq. 4-9). ' +
+  'Above fiber saturation wood does not change size.';
 
 /** Shrinkage from green at MC x, % of green size (WH2021 Eq. 4-9); none above fiber saturation. */
 export function shrinkageFromGreenPercent(totalShrinkagePercent: number, mcPercent: number): number {
-  const x = Math.min(mcPercent, FIBER_SATURATION_MC);
+  const x = Math.min(Math.max(mcPercent, 0), FIBER_SATURATION_MC);
   return totalShrinkagePercent * (1 - x / FIBER_SATURATION_MC);
+}
+
+/** Size at MC x as a share of the green size: 1 − S_x/100. Continuous, rising to 1 at fiber saturation, flat above. */
+export function relativeSizeAtMc(totalShrinkagePercent: number, mcPercent: number): number {
+  return 1 - shrinkageFromGreenPercent(totalShrinkagePercent, mcPercent) / 100;
 }
 
 /**
  * Width change of a board as it dries or takes up water. Flatsawn width moves
  * tangentially to the growth rings, quartersawn width radially.
+ *
+ * One model over the whole range: the size at each MC is a fixed share of the green size
+ * (Eq. 4-9 with the species' own Table 4-3 row), and a change is the ratio of the two sizes.
+ * So the result is continuous and monotonic in both moisture contents, and drying in steps
+ * (A → B → C) ends at the same size as drying straight through (A → C).
+ * The Table 13-5 coefficients (6–14 % MC) are kept on the species only as a cross-check.
  */
 export function dimensionalChangeDetail(input: DimensionalChangeInput): DimensionalChangeDetail {
   const { dimensionIn, speciesSlug, grain, fromMcPercent, toMcPercent } = input;
-  requirePositive(dimensionIn, 'dimensionIn');
-  requireMoistureContent(fromMcPercent, 'fromMcPercent');
-  requireMoistureContent(toMcPercent, 'toMcPercent');
+  requireSize(dimensionIn, 'dimensionIn', WOOD_LIMITS.lengthIn);
   if (grain !== 'flatsawn' && grain !== 'quartersawn') {
     throw new WoodMathError(`grain must be "flatsawn" or "quartersawn" (got ${String(grain)})`, 'grain');
   }
   const species = getSpecies(speciesSlug);
+  requireSpeciesMoistureContent(species, fromMcPercent, 'fromMcPercent');
+  requireSpeciesMoistureContent(species, toMcPercent, 'toMcPercent');
   const direction = grain === 'flatsawn' ? 'tangential' : 'radial';
-
-  if (inCoefficientRange(fromMcPercent) && inCoefficientRange(toMcPercent)) {
-    const c = grain === 'flatsawn' ? species.tangentialCoefficient : species.radialCoefficient;
-    return {
-      changeIn: dimensionIn * c * (toMcPercent - fromMcPercent),
-      method: 'coefficient',
-      note: `Both moisture contents lie in 6–14 %, so the ${direction} coefficient ${c} per % MC is used (Wood Handbook Table 13-5).`,
-    };
-  }
-
   const total = species.shrinkage[direction];
-  const sizeFactor = (mc: number) => 1 - shrinkageFromGreenPercent(total, mc) / 100;
-  const changeIn = dimensionIn * (sizeFactor(toMcPercent) / sizeFactor(fromMcPercent) - 1);
+  const ratio = relativeSizeAtMc(total, toMcPercent) / relativeSizeAtMc(total, fromMcPercent);
   const aboveFsp = fromMcPercent > FIBER_SATURATION_MC || toMcPercent > FIBER_SATURATION_MC;
-  const clampNote = aboveFsp
-    ? ` Above fiber saturation (${FIBER_SATURATION_MC} % MC) wood does not change size, so moisture above it is treated as ${FIBER_SATURATION_MC} %.`
-    : '';
   return {
-    changeIn,
+    changeIn: dimensionIn * (ratio - 1),
+    ratio,
     method: 'shrinkage-from-green',
     note:
-      `A moisture content lies outside 6–14 %, so the ${direction} shrinkage from green (${total} %) is scaled ` +
-      `linearly below fiber saturation (Wood Handbook Eq. 4-9).${clampNote}`,
+      `${MOVEMENT_METHOD_NOTE} ${species.name}, ${direction}: ${total} % from green to oven-dry.` +
+      (aboveFsp ? ` Moisture above ${FIBER_SATURATION_MC} % is counted as ${FIBER_SATURATION_MC} %.` : ''),
   };
 }
 

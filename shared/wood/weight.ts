@@ -1,7 +1,6 @@
 import { boardFeet } from './board-feet';
-import { requireMoistureContent } from './moisture';
 import { shrinkageFromGreenPercent } from './shrinkage';
-import { getSpecies } from './species';
+import { getSpecies, requireSpeciesMoistureContent } from './species';
 
 export type WoodDensityInput = { speciesSlug: string; mcPercent: number };
 export type SlabWeightInput = WoodDensityInput & { thicknessIn: number; widthIn: number; lengthIn: number };
@@ -15,8 +14,8 @@ export const WATER_DENSITY_LB_PER_CU_FT = 62.43;
  * Above fiber saturation the volume stays green, so G_x = G_b.
  */
 export function specificGravityAtMc({ speciesSlug, mcPercent }: WoodDensityInput): number {
-  requireMoistureContent(mcPercent, 'mcPercent');
   const species = getSpecies(speciesSlug);
+  requireSpeciesMoistureContent(species, mcPercent, 'mcPercent');
   const sx = shrinkageFromGreenPercent(species.shrinkage.volumetric, mcPercent);
   return species.basicSpecificGravity / (1 - sx / 100);
 }
@@ -35,4 +34,24 @@ export function slabWeightLb(input: SlabWeightInput): number {
   const { thicknessIn, widthIn, lengthIn } = input;
   const cubicFeet = boardFeet({ thicknessIn, widthIn, lengthIn }) / 12;
   return woodDensityLbPerCuFt(input) * cubicFeet;
+}
+
+/**
+ * The moisture content to weigh a slab at: its latest reading when there is one; otherwise the
+ * species' typical green moisture content, so a slab nobody has measured is never weighed light.
+ */
+export function weighingMoistureContent(speciesSlug: string, latestMcPercent: number | null):
+  { mcPercent: number; basis: 'reading' | 'typical-green'; note: string } {
+  const species = getSpecies(speciesSlug);
+  if (latestMcPercent !== null) {
+    requireSpeciesMoistureContent(species, latestMcPercent, 'mcPercent');
+    return { mcPercent: latestMcPercent, basis: 'reading', note: `Weighed at its latest moisture reading, ${latestMcPercent} %.` };
+  }
+  return {
+    mcPercent: species.greenMcPercent,
+    basis: 'typical-green',
+    note: `No moisture reading yet, so it is weighed as freshly sawn ${species.name.toLowerCase()} at about ` +
+      `${species.greenMcPercent} % moisture (typical green wood, after USDA Wood Handbook Table 4-1; figure from memory). ` +
+      'A drier slab weighs less.',
+  };
 }

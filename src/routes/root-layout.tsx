@@ -1,6 +1,11 @@
+import { useCallback } from 'react';
 import { NavLink, Outlet, useNavigation } from 'react-router';
+import type { UnitSystem } from '../../shared/wood/index';
 import { useQuery } from '@tanstack/react-query';
-import { meQuery, type Role } from '../features/session/api';
+import { meQuery, preferencesQuery, useSavePreferences, type Role } from '../features/session/api';
+import { useCompareList } from '../features/buyer-lists/api';
+import { UnitsProvider } from '../lib/units';
+import { UnitsSwitch } from '../components/units-switch';
 import { paths } from '../paths';
 
 type NavItem = { to: string; label: string; roles?: Role[]; visitorOnly?: boolean; signedIn?: boolean };
@@ -8,6 +13,7 @@ type NavItem = { to: string; label: string; roles?: Role[]; visitorOnly?: boolea
 // One list decides who sees which link; the server still checks every call.
 const NAV: NavItem[] = [
   { to: paths.catalogue(), label: 'Slabs' },
+  { to: paths.saved(), label: 'Saved', signedIn: true },
   { to: paths.reservations(), label: 'My holds', signedIn: true },
   { to: paths.orders(), label: 'Orders', signedIn: true },
   { to: paths.yard(), label: 'Yard desk', roles: ['seller', 'admin'] },
@@ -22,10 +28,19 @@ const linkClass = ({ isActive }: { isActive: boolean }) =>
 export function RootLayout() {
   const { data: me } = useQuery(meQuery());
   const navigation = useNavigation();
-  const items = NAV.filter((i) =>
+  const compare = useCompareList();
+  // A signed-in person's units live on their account; a visitor's in this browser.
+  const { data: prefs } = useQuery({ ...preferencesQuery(), enabled: !!me });
+  const savePrefs = useSavePreferences();
+  const { mutate: savePreferences } = savePrefs;
+  const saveToAccount = useCallback((units: UnitSystem) => savePreferences({ units }), [savePreferences]);
+  const shown = NAV.filter((i) =>
     i.visitorOnly ? !me : i.signedIn ? !!me : i.roles ? !!me && i.roles.includes(me.role) : true,
   );
+  // The compare link appears once something is on the list, right after "Slabs".
+  const items = compare.ids.length ? [shown[0], { to: paths.compare(), label: `Compare (${compare.ids.length})` }, ...shown.slice(1)] : shown;
   return (
+    <UnitsProvider accountUnits={me ? prefs?.units ?? null : null} saveToAccount={me ? saveToAccount : undefined}>
     <div className="flex min-h-screen flex-col">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-surface-raised focus:p-2">Skip to content</a>
       <header className="no-print border-b border-line bg-surface-raised">
@@ -34,11 +49,14 @@ export function RootLayout() {
             <img src="/favicon.svg" alt="" width="32" height="32" />
             <span className="font-display text-xl font-bold text-accent-strong">Stickerline</span>
           </NavLink>
-          <nav aria-label="Main">
-            <ul className="flex flex-wrap items-center gap-1">
-              {items.map((i) => <li key={i.to}><NavLink to={i.to} end={i.to === '/'} className={linkClass}>{i.label}</NavLink></li>)}
-            </ul>
-          </nav>
+          <div className="flex flex-wrap items-center gap-3">
+            <nav aria-label="Main">
+              <ul className="flex flex-wrap items-center gap-1">
+                {items.map((i) => <li key={i.to}><NavLink to={i.to} end={i.to === '/'} className={linkClass}>{i.label}</NavLink></li>)}
+              </ul>
+            </nav>
+            <UnitsSwitch />
+          </div>
         </div>
         {navigation.state === 'loading' && <div className="h-0.5 animate-pulse bg-accent" aria-hidden="true" />}
       </header>
@@ -51,5 +69,6 @@ export function RootLayout() {
         </div>
       </footer>
     </div>
+    </UnitsProvider>
   );
 }

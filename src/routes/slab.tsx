@@ -6,6 +6,7 @@ import { SlabPage } from '../features/catalogue/components/slab-page';
 import { FitCheck } from '../features/wood-advice/components/fit-check';
 import { FlatteningEstimatePanel } from '../features/wood-advice/components/flattening-estimate';
 import { ReserveButton } from '../features/reservations/components/reserve-button';
+import { SlabInterest } from '../features/buyer-lists/components/slab-interest';
 import { meQuery } from '../features/session/api';
 import { Link } from 'react-router';
 import { paths } from '../paths';
@@ -30,12 +31,14 @@ function SlabExtras({ slabId }: { slabId: number }) {
 /** Reserve, with a book-matched pair offered when a neighbouring slab of the same log is also for sale. */
 function SlabActions({ slabId }: { slabId: number }) {
   const { data: slab } = useQuery(slabDetailQuery(slabId));
+  const { data: me } = useQuery(meQuery());
   if (!slab) return null;
   const neighbour = slab.neighbours.find((n) => !n.isThisSlab && n.status === 'listed' && n.sequenceInLog === slab.sequenceInLog + 1)
     ?? slab.neighbours.find((n) => !n.isThisSlab && n.status === 'listed' && n.sequenceInLog === slab.sequenceInLog - 1);
   return (
     <>
       <ReserveButton slabId={slab.id} slabCode={slab.code} status={slab.status} matchedNeighbour={neighbour ? { id: neighbour.id, code: neighbour.code } : null} />
+      <SlabInterest slabId={slab.id} code={slab.code} status={slab.status} signedIn={!!me} />
       <StaffLinks slabId={slab.id} />
     </>
   );

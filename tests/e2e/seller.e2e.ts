@@ -8,9 +8,13 @@ import { demoAccount, signInThroughForm } from './steps/session';
 
 const stickerline = useStickerline();
 
-const WIDTHS = ['17.5', '18.25', '19'];
-const THICKNESS = '2.25';
-const LENGTH = '84';
+// Sizes typed the way the yard writes them: fractions, a dash, a unicode half, an inch mark.
+const WIDTHS = ['17 1/2', '18-1/4', '19"'];
+const WIDTHS_IN = [17.5, 18.25, 19];
+const THICKNESS = '9/4';
+const THICKNESS_IN = 2.25;
+const LENGTH = '83 ½';
+const LENGTH_IN = 83.5;
 
 /** Slows uploads to about 64 kB/s (Chromium's network emulation) so the progress bar has time to show. */
 async function slowUploads(page: Page) {
@@ -38,8 +42,8 @@ describe('a seller at the yard desk', () => {
       await page.getByLabel('Felled on').fill('2024-03-02');
       await page.getByLabel('Milled on').fill('2024-04-11');
       await page.getByLabel('Length (in)').fill('96');
-      await page.getByLabel('Butt diameter (in)').fill('26');
-      await page.getByLabel('Top diameter (in)').fill('21');
+      await page.getByLabel('Butt diameter (in)').fill('26 1/4');
+      await page.getByLabel('Top diameter (in)').fill('21-3/8"');
       await page.getByLabel('Where it came from').fill('Storm-felled hedgerow tree from Tansy Lane, Quennadale.');
       await page.getByRole('button', { name: 'Record log' }).click();
       const logHeading = page.getByRole('heading', { level: 1, name: /^Log L-\d{4}-\d{2}/ });
@@ -52,11 +56,17 @@ describe('a seller at the yard desk', () => {
       await page.getByLabel('Thickness (in)').fill(THICKNESS);
       await page.getByLabel('Length (in)').fill(LENGTH);
       const widths = page.getByRole('group', { name: 'Widths along the slab (in)' });
-      while ((await widths.getByRole('spinbutton').count()) < WIDTHS.length) await widths.getByRole('button', { name: 'Add a station' }).click();
+      while ((await widths.getByRole('textbox').count()) < WIDTHS.length) await widths.getByRole('button', { name: 'Add a station' }).click();
+      // A slip first: "1/2/3" is no size, and the form says so at that box without losing the rest.
+      await widths.getByLabel('Station 1').fill('1/2/3');
+      await page.getByRole('button', { name: 'Record slab' }).click();
+      await widths.getByText('"1/2/3" is not a size we can read').waitFor();
+      expect(await page.getByLabel('Thickness (in)').inputValue()).toBe(THICKNESS);
       for (const [i, w] of WIDTHS.entries()) await widths.getByLabel(`Station ${i + 1}`).fill(w);
-      // The live tally must agree with the shared board-foot formula.
-      const bf = roundBoardFeet(boardFeet({ thicknessIn: Number(THICKNESS), widthIn: averageWidthIn(WIDTHS.map(Number)), lengthIn: Number(LENGTH) }));
-      await expect.poll(() => widths.textContent()).toContain(`${bf} board feet`);
+      // The live tally must agree with the shared board-foot formula on the sizes as read.
+      const bf = roundBoardFeet(boardFeet({ thicknessIn: THICKNESS_IN, widthIn: averageWidthIn(WIDTHS_IN), lengthIn: LENGTH_IN }));
+      await expect.poll(() => widths.textContent()).toContain(`${bf} bd ft`);
+      await expect.poll(() => widths.textContent()).toContain('Average width 18 1/4 in');
       await page.getByLabel('Live edge').selectOption({ index: 2 });
       await page.getByLabel('Status').selectOption({ label: 'Dry, not yet for sale' });
       await page.getByLabel('Description for buyers').fill('Dark heartwood with a sapwood stripe along one edge.');
@@ -64,6 +74,9 @@ describe('a seller at the yard desk', () => {
       const slabHeading = page.getByRole('heading', { level: 1, name: new RegExp(`${logCode}-\\d{2}`) });
       await slabHeading.waitFor();
       const slabCode = new RegExp(`${logCode}-\\d{2}`).exec((await slabHeading.textContent()) ?? '')![0];
+      // Saved as read: the record shows the sizes back in the shop's fractions.
+      expect(await page.getByLabel('Thickness (in)').inputValue()).toBe('2 1/4');
+      expect(await page.getByLabel('Length (in)').inputValue()).toBe('83 1/2');
 
       // A photo, with the upload's progress visible on the way.
       await page.getByRole('navigation', { name: 'Slab pages' }).getByRole('link', { name: /^Photos/ }).click();

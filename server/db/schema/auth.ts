@@ -1,6 +1,7 @@
 // Tables used by the auth library (better-auth core + admin plugin). Column names follow what
 // its CLI generates (compare with `npm run auth:check`); keep them in step when upgrading the library.
-import { boolean, index, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
+import { boolean, check, index, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
 
 export const user = pgTable('user', {
   id: text('id').primaryKey(),
@@ -14,7 +15,10 @@ export const user = pgTable('user', {
   banned: boolean('banned').default(false),
   banReason: text('ban_reason'),
   banExpires: timestamp('ban_expires'),
-});
+  // Stickerline's own column (not the auth library's): how this person wants sizes and weights
+  // shown. Null until they choose; the browser's own choice applies meanwhile.
+  units: text('units'),
+}, (t) => [check('user_units_known', sql`${t.units} is null or ${t.units} in ('imperial', 'metric')`)]);
 
 export const session = pgTable('session', {
   id: text('id').primaryKey(),

@@ -11,3 +11,4 @@ export * from './pickups';
 export * from './orders';
 export * from './audit-log';
 export * from './email-outbox';
+export * from './buyer-lists';

@@ -1,4 +1,5 @@
-import { boolean, index, integer, pgTable, serial, text, timestamp } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
+import { boolean, check, index, integer, pgTable, serial, text, timestamp } from 'drizzle-orm/pg-core';
 import { slabs } from './slabs';
 
 export const slabPhotos = pgTable('slab_photos', {
@@ -12,5 +13,10 @@ export const slabPhotos = pgTable('slab_photos', {
   isCover: boolean('is_cover').notNull().default(false),
   isIllustration: boolean('is_illustration').notNull().default(false),
   altText: text('alt_text').notNull().default(''),
+  /** Which side of the slab the photo shows (see PHOTO_VIEWS in shared/photos.ts); null = not said. */
+  view: text('view'),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-}, (t) => [index('slab_photos_slab_idx').on(t.slabId)]);
+}, (t) => [
+  index('slab_photos_slab_idx').on(t.slabId),
+  check('slab_photos_view_known', sql`${t.view} is null or ${t.view} in ('top-face', 'bottom-face', 'end-grain', 'edge', 'defect')`),
+]);

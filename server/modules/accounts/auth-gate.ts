@@ -1,7 +1,7 @@
 import express, { Router } from 'express';
 import { AppError } from '../../lib/errors';
 import { CLIENT_IP_HEADER } from '../../lib/auth';
-import { SIGN_IN_FAILURES_PER_ACCOUNT, SIGN_IN_PAUSE_MINUTES } from '../../../shared/accounts';
+import { changeEmailSchema, SIGN_IN_FAILURES_PER_ACCOUNT, SIGN_IN_PAUSE_MINUTES, updateNameSchema } from '../../../shared/accounts';
 import { sameOriginOnly } from '../../lib/same-origin';
 import { createSignInThrottle } from './sign-in-throttle';
 
@@ -48,6 +48,20 @@ export function authGate(opts: { trustedOrigins?: string[]; maxFailures?: number
     res.on('finish', () => {
       attempt.settle(res.statusCode === 401 ? 'wrong-password' : res.statusCode === 200 ? 'signed-in' : 'other');
     });
+    next();
+  });
+
+  // A person may change only their own name here (the library refuses e-mail and role changes on
+  // this route); the same rules as the sign-up form apply, with messages at the field.
+  router.post('/update-user', express.json({ limit: '10kb' }), (req, _res, next) => {
+    const input = updateNameSchema.strict().parse(req.body ?? {});
+    req.body = input;
+    next();
+  });
+  router.post('/change-email', express.json({ limit: '10kb' }), (req, _res, next) => {
+    const { callbackURL } = req.body ?? {};
+    const input = changeEmailSchema.parse(req.body ?? {});
+    req.body = { newEmail: input.newEmail, ...(typeof callbackURL === 'string' ? { callbackURL } : {}) };
     next();
   });
 

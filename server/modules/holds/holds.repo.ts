@@ -1,5 +1,6 @@
 import { and, asc, count, desc, eq, inArray, lte } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
+import { vouchedFor } from '../readings/reading-visibility';
 import { holds, moistureReadings, slabPhotos, slabs, species, user } from '../../db/schema/index';
 
 /** Moves a slab listed → held; returns nothing when another request got there first. */
@@ -59,7 +60,7 @@ export async function withReadingsAndCovers<T extends { slab: typeof slabs.$infe
   if (!ids.length) return [];
   const [readings, photos] = await Promise.all([
     tx.select({ slabId: moistureReadings.slabId, mc: moistureReadings.mcPercent }).from(moistureReadings)
-      .where(inArray(moistureReadings.slabId, ids)).orderBy(asc(moistureReadings.measuredOn), asc(moistureReadings.id)),
+      .where(and(inArray(moistureReadings.slabId, ids), vouchedFor)).orderBy(asc(moistureReadings.measuredOn), asc(moistureReadings.id)),
     tx.select({ slabId: slabPhotos.slabId, key: slabPhotos.fileKey }).from(slabPhotos)
       .where(inArray(slabPhotos.slabId, ids)).orderBy(desc(slabPhotos.isCover), asc(slabPhotos.position), asc(slabPhotos.id)),
   ]);
@@ -81,4 +82,10 @@ export function findExpiredHolds(tx: Tx, now: Date) {
 
 export function findLogNeighbours(tx: Tx, ids: number[]) {
   return tx.select().from(slabs).where(inArray(slabs.id, ids));
+}
+
+/** Code and species of each slab, for messages about them. */
+export function slabLabels(tx: Tx, ids: number[]) {
+  return tx.select({ code: slabs.code, speciesName: species.name }).from(slabs)
+    .innerJoin(species, eq(species.id, slabs.speciesId)).where(inArray(slabs.id, ids)).orderBy(asc(slabs.code));
 }

@@ -1,5 +1,7 @@
 import { Router } from 'express';
 import type { Db } from '../../db/client';
+import type { Mailer } from '../../lib/mail';
+import { flushOutbox } from '../../lib/outbox';
 import { AppError } from '../../lib/errors';
 import { requireUser } from '../../lib/session';
 import { matchedSetSchema } from '../../../shared/holds';
@@ -16,22 +18,28 @@ const view = (h: { id: number; slabId: number; groupId: string | null; status: s
 });
 
 /** Holds (reservations): any signed-in account may hold a listed slab for a while before paying. */
-export function holdRoutes({ db, holdHours }: { db: Db; holdHours?: number }) {
+export function holdRoutes({ db, holdHours, mailer, publicUrl, trustedOrigins }: { db: Db; holdHours?: number; mailer: Mailer; publicUrl?: string; trustedOrigins?: string[] }) {
   const router = Router();
+  const base = publicUrl ?? trustedOrigins?.[0] ?? '';
+  // The background job would send them within seconds anyway; sending now saves the buyer the wait.
+  const sendMail = () => flushOutbox(db, mailer).catch((err) => console.warn('[holds] mail flush failed', (err as Error).message));
   router.post('/slabs/:id/hold', requireUser, async (req, res) => {
-    const hold = await placeHold(db, req.user!, parseId(String(req.params.id), 'That slab'), { holdHours });
+    const hold = await placeHold(db, req.user!, parseId(String(req.params.id), 'That slab'), { holdHours, publicUrl: base });
+    await sendMail();
     res.status(201).json({ hold: view(hold) });
   });
   router.post('/holds/matched-set', requireUser, async (req, res) => {
     const { slabIds } = matchedSetSchema.parse(req.body);
-    const holds = await placeMatchedSet(db, req.user!, slabIds, { holdHours });
+    const holds = await placeMatchedSet(db, req.user!, slabIds, { holdHours, publicUrl: base });
+    await sendMail();
     res.status(201).json({ holds: holds.map(view) });
   });
   router.get('/holds', requireUser, async (req, res) => {
     res.json({ holds: await listHolds(db, req.user!.id) });
   });
   router.delete('/holds/:id', requireUser, async (req, res) => {
-    await releaseHold(db, req.user!, parseId(String(req.params.id), 'That hold'));
+    await releaseHold(db, req.user!, parseId(String(req.params.id), 'That hold'), { publicUrl: base });
+    await sendMail();
     res.status(204).end();
   });
   return router;

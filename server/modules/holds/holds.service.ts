@@ -5,7 +5,9 @@ import { AppError, notFound } from '../../lib/errors';
 import { recordAudit } from '../../lib/audit';
 import type { SessionUser } from '../../lib/session';
 import { queueEmail } from '../../lib/outbox';
-import { holdExpiredEmail } from '../../lib/email-templates';
+import { holdExpiredEmail, holdPlacedEmail } from '../../lib/email-templates';
+import { tellWatchersSlabsAreFree } from '../buyer-lists/slab-watches';
+import { millDateTime } from '../pickups/slot-calendar';
 import { photoUrls } from '../../../shared/photos';
 import { DEFAULT_HOLD_HOURS, MAX_ACTIVE_HOLDS_PER_BUYER, type HoldStatus, type HoldView } from '../../../shared/holds';
 import { roundBoardFeet } from '../../../shared/wood/index';
@@ -15,7 +17,7 @@ import { isUniqueViolation } from './unique-violation';
 import { quoteSlab } from '../pricing/slab-quote';
 import * as repo from './holds.repo';
 
-export type HoldOptions = { holdHours?: number; now?: Date };
+export type HoldOptions = { holdHours?: number; now?: Date; publicUrl?: string };
 
 const HELD_BY_OTHER = 'This slab is already on hold for another buyer.';
 
@@ -58,6 +60,11 @@ async function holdSlabs(db: Db, buyer: SessionUser, slabIds: number[], opts: Ho
         if (!(await repo.markSlabHeld(tx, slabId))) throw await refusal(tx, slabId, buyer.id);
         created.push(await repo.insertHold(tx, { slabId, buyerId: buyer.id, groupId, expiresAt, createdAt: now }));
       }
+      const held = await repo.slabLabels(tx, slabIds);
+      await queueEmail(tx, {
+        to: buyer.email, kind: 'hold-placed',
+        content: holdPlacedEmail({ name: buyer.name, slabs: held, until: millDateTime(expiresAt), url: `${opts.publicUrl ?? ''}/reservations` }),
+      });
       return created;
     });
   } catch (err) {
@@ -102,7 +109,7 @@ export async function listHolds(db: Db, buyerId: string, now = new Date()): Prom
 }
 
 /** The owner gives a hold up (or an admin lifts it): the slab goes back on sale. */
-export async function releaseHold(db: Db, actor: SessionUser, holdId: number) {
+export async function releaseHold(db: Db, actor: SessionUser, holdId: number, { publicUrl = '' } = {}) {
   return db.transaction(async (tx) => {
     const hold = await repo.findHold(tx, holdId);
     const isAdmin = actor.role === 'admin';
@@ -111,6 +118,7 @@ export async function releaseHold(db: Db, actor: SessionUser, holdId: number) {
     const [closed] = await repo.closeHolds(tx, [hold.id], 'released', actor.id);
     if (!closed) throw new AppError(409, 'hold_closed', 'That hold has already ended.');
     await repo.markSlabsListed(tx, [hold.slabId]);
+    await tellWatchersSlabsAreFree(tx, [hold.slabId], { publicUrl });
     if (hold.buyerId !== actor.id) {
       await recordAudit(tx, { actor, action: 'hold.release', entityType: 'hold', entityId: hold.id, before: { status: 'active' }, after: { status: 'released' } });
     }
@@ -127,6 +135,7 @@ export async function releaseExpiredHolds(db: Db, { now = new Date(), publicUrl 
     const closedIds = new Set(closed.map((h) => h.id));
     const done = expired.filter((e) => closedIds.has(e.hold.id));
     await repo.markSlabsListed(tx, done.map((e) => e.hold.slabId));
+    await tellWatchersSlabsAreFree(tx, done.map((e) => e.hold.slabId), { publicUrl, now });
     const byBuyer = new Map<string, typeof done>();
     for (const e of done) byBuyer.set(e.buyerEmail, [...(byBuyer.get(e.buyerEmail) ?? []), e]);
     for (const [email, items] of byBuyer) {

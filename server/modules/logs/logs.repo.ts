@@ -1,4 +1,5 @@
 import { asc, desc, eq, like, sql } from 'drizzle-orm';
+import { yardPriceCents } from '../pricing/sold-price';
 import type { Tx } from '../../db/client';
 import { logs, slabs, species } from '../../db/schema/index';
 
@@ -19,7 +20,7 @@ export async function findLog(db: Tx, id: number) {
 export function findLogSlabs(db: Tx, logId: number) {
   return db.select({
     id: slabs.id, code: slabs.code, sequenceInLog: slabs.sequenceInLog, status: slabs.status, thicknessIn: slabs.thicknessIn,
-    widthIn: slabs.widthIn, lengthIn: slabs.lengthIn, boardFeet: slabs.boardFeet, priceCents: slabs.priceCents, yardStack: slabs.yardStack,
+    widthIn: slabs.widthIn, lengthIn: slabs.lengthIn, boardFeet: slabs.boardFeet, priceCents: yardPriceCents, yardStack: slabs.yardStack,
   }).from(slabs).where(eq(slabs.logId, logId)).orderBy(asc(slabs.sequenceInLog));
 }
 

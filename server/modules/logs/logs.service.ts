@@ -3,6 +3,7 @@ import { AppError, notFound, validationError } from '../../lib/errors';
 import type { SessionUser } from '../../lib/session';
 import { createLogSchema, updateLogSchema, type LogDetail, type LogSummary } from '../../../shared/logs';
 import * as repo from './logs.repo';
+import { readMillSettings } from '../pricing/pricing.repo';
 
 type LogRow = NonNullable<Awaited<ReturnType<typeof repo.findLog>>>;
 
@@ -26,8 +27,8 @@ export async function listLogs(db: Db): Promise<LogSummary[]> {
 export async function getLog(db: Db, id: number): Promise<LogDetail> {
   const row = await repo.findLog(db, id);
   if (!row) throw notFound('That log');
-  const slabs = await repo.findLogSlabs(db, id);
-  return { ...toSummary(row), slabs: slabs.map((s) => ({ ...s, status: s.status as LogDetail['slabs'][number]['status'] })) };
+  const [slabs, settings] = await Promise.all([repo.findLogSlabs(db, id), readMillSettings(db)]);
+  return { ...toSummary(row), targetMcPercent: settings?.targetMcPercent ?? 8, slabs: slabs.map((s) => ({ ...s, status: s.status as LogDetail['slabs'][number]['status'] })) };
 }
 
 /** Next code in the yard's yearly series: L-2026-01, L-2026-02 … (year of felling, else this year). */

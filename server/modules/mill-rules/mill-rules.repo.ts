@@ -1,4 +1,5 @@
-import { asc, eq, inArray } from 'drizzle-orm';
+import { asc, eq, notInArray } from 'drizzle-orm';
+import { SOLD_STATUSES } from '../../../shared/slabs';
 import type { Tx } from '../../db/client';
 import { figureKinds, millSettings, slabs, species } from '../../db/schema/index';
 
@@ -17,11 +18,11 @@ export const setSpeciesRate = (db: Tx, slug: string, cents: number) =>
 export const setFigurePremium = (db: Tx, slug: string, multiplier: number) =>
   db.update(figureKinds).set({ premiumMultiplier: multiplier }).where(eq(figureKinds.slug, slug)).returning({ slug: figureKinds.slug });
 
-/** Slabs whose price is still open: everything not yet sold. */
+/** Slabs whose price is still open: everything not yet sold (a sold slab keeps the price it sold at). */
 export const unsoldSlabs = (db: Tx) =>
   db.select({ slab: slabs, rate: species.ratePerBoardFootCents }).from(slabs)
     .innerJoin(species, eq(species.id, slabs.speciesId))
-    .where(inArray(slabs.status, ['drying', 'ready', 'listed', 'held', 'withdrawn']));
+    .where(notInArray(slabs.status, [...SOLD_STATUSES]));
 
 export const setSlabPrice = (db: Tx, id: number, priceCents: number) =>
   db.update(slabs).set({ priceCents, updatedAt: new Date() }).where(eq(slabs.id, id));

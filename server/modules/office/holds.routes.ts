@@ -1,17 +1,21 @@
 import { Router } from 'express';
-import type { Db } from '../../db/client';
+import type { AppDeps } from '../../app';
+import { flushOutbox } from '../../lib/outbox';
 import { requireRole } from '../../lib/session';
 import { listActiveHolds, releaseHold } from './holds.service';
 import { parseRouteId } from './route-id';
 
-export function officeHoldRoutes({ db }: { db: Db }) {
+export function officeHoldRoutes({ db, mailer, publicUrl, trustedOrigins }: AppDeps) {
   const router = Router();
+  const base = publicUrl ?? trustedOrigins?.[0] ?? '';
   const admin = requireRole('admin');
   router.get('/office/holds', admin, async (_req, res) => {
     res.json({ items: await listActiveHolds(db) });
   });
   router.delete('/office/holds/:id', admin, async (req, res) => {
-    res.json(await releaseHold(db, req.user!, parseRouteId(req.params.id as string, 'That hold')));
+    const result = await releaseHold(db, req.user!, parseRouteId(req.params.id as string, 'That hold'), { publicUrl: base });
+    await flushOutbox(db, mailer).catch((err) => console.warn('[office] mail flush failed', (err as Error).message));
+    res.json(result);
   });
   return router;
 }

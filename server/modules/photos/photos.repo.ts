@@ -29,7 +29,7 @@ export function insertPhotos(tx: Tx, rows: NewPhoto[]) {
   return tx.insert(slabPhotos).values(rows).returning();
 }
 
-export async function updatePhoto(tx: Tx, photoId: number, values: Partial<Pick<PhotoRow, 'altText' | 'isIllustration' | 'isCover' | 'position'>>) {
+export async function updatePhoto(tx: Tx, photoId: number, values: Partial<Pick<PhotoRow, 'altText' | 'isIllustration' | 'isCover' | 'position' | 'view'>>) {
   const [row] = await tx.update(slabPhotos).set(values).where(eq(slabPhotos.id, photoId)).returning();
   return row;
 }

@@ -14,7 +14,8 @@ export type IncomingFile = { buffer: Buffer; originalname: string };
 
 export const toView = (p: repo.PhotoRow): YardPhotoView => ({
   id: p.id, ...photoUrls(p.fileKey), width: p.width, height: p.height, position: p.position,
-  isCover: p.isCover, isIllustration: p.isIllustration, altText: p.altText, createdAt: p.createdAt.toISOString(),
+  isCover: p.isCover, isIllustration: p.isIllustration, altText: p.altText, view: (p.view as YardPhotoView['view']) ?? null,
+  createdAt: p.createdAt.toISOString(),
 });
 
 const overCap = (existing: number) =>

@@ -26,6 +26,10 @@ export function windowStart(day: string, hhmm: string, tz = millTimeZone()): Dat
   return new Date(naive - zoneOffsetMs(new Date(first), tz));
 }
 
+/** An instant as the mill's clock shows it, for e-mails: "Fri, Dec 4, 2026, 14:30 (America/Chicago)". */
+export const millDateTime = (at: Date, tz = millTimeZone()) =>
+  `${new Intl.DateTimeFormat('en-US', { timeZone: tz, weekday: 'short', year: 'numeric', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(at)} (${tz})`;
+
 /** The calendar date at the mill for an instant (YYYY-MM-DD). */
 export const millDay = (at: Date, tz = millTimeZone()) =>
   new Intl.DateTimeFormat('en-CA', { timeZone: tz, year: 'numeric', month: '2-digit', day: '2-digit' }).format(at);

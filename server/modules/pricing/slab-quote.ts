@@ -1,4 +1,4 @@
-import { DEFAULT_AIR_DRY_MC, flatteningEstimate, slabPriceBreakdown, slabWeightLb, type PricingRules } from '../../../shared/wood/index';
+import { flatteningEstimate, slabPriceBreakdown, slabWeightLb, weighingMoistureContent, type PricingRules } from '../../../shared/wood/index';
 import type { FlatteningOffer } from '../../../shared/holds';
 import type { slabs, species } from '../../db/schema/index';
 
@@ -27,8 +27,9 @@ export function quoteSlab(slab: SlabRow, sp: SpeciesRow, latestMcPercent: number
     finishedThicknessIn: estimate.finishedThicknessIn,
     ...(estimate.feasible ? (rules.flatteningCentsPerSqFt > 0 ? {} : { reason: 'The mill does not offer flattening at the moment.' }) : { reason: estimate.reason }),
   };
-  const mcPercent = latestMcPercent ?? DEFAULT_AIR_DRY_MC;
+  const weighing = weighingMoistureContent(sp.slug, latestMcPercent);
+  const mcPercent = weighing.mcPercent;
   const weightLb = slabWeightLb({ speciesSlug: sp.slug, thicknessIn: slab.thicknessIn, widthIn: slab.widthIn, lengthIn: slab.lengthIn, mcPercent });
   const breakdown = slabPriceBreakdown({ ...priceInput, withFlattening });
-  return { breakdown, weightLb, mcPercent, flattening };
+  return { breakdown, weightLb, mcPercent, weighing, flattening };
 }

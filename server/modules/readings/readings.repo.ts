@@ -1,6 +1,7 @@
-import { and, asc, desc, eq, inArray } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, lte } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
-import { logs, millSettings, moistureReadings, slabs } from '../../db/schema/index';
+import { logs, millSettings, moistureReadings, slabs, species } from '../../db/schema/index';
+import { vouchedFor } from './reading-visibility';
 
 export type ReadingRow = typeof moistureReadings.$inferSelect;
 export type NewReading = typeof moistureReadings.$inferInsert;
@@ -39,10 +40,25 @@ export function listReadings(db: Tx, slabId: number) {
     .orderBy(asc(moistureReadings.measuredOn), asc(moistureReadings.id));
 }
 
-/** The reading that decides the drying state: the latest by date, then the last entered that day. */
+/** The reading that decides the drying state: the latest vouched-for one by date, then the last entered that day. */
 export async function latestReading(tx: Tx, slabId: number) {
-  const [row] = await tx.select().from(moistureReadings).where(eq(moistureReadings.slabId, slabId))
+  const [row] = await tx.select().from(moistureReadings).where(and(eq(moistureReadings.slabId, slabId), vouchedFor))
     .orderBy(desc(moistureReadings.measuredOn), desc(moistureReadings.id)).limit(1);
+  return row ?? null;
+}
+
+/** The vouched-for reading a new one taken on `measuredOn` follows: the latest on or before that day. */
+export async function readingBefore(tx: Tx, slabId: number, measuredOn: string) {
+  const [row] = await tx.select({ measuredOn: moistureReadings.measuredOn, mcPercent: moistureReadings.mcPercent }).from(moistureReadings)
+    .where(and(eq(moistureReadings.slabId, slabId), lte(moistureReadings.measuredOn, measuredOn), vouchedFor))
+    .orderBy(desc(moistureReadings.measuredOn), desc(moistureReadings.id)).limit(1);
+  return row ?? null;
+}
+
+/** The basic specific gravity of the slab's species: it caps what an oven-dry sample can show. */
+export async function speciesOfSlab(tx: Tx, slabId: number) {
+  const [row] = await tx.select({ name: species.name, basicSpecificGravity: species.basicSpecificGravity })
+    .from(slabs).innerJoin(species, eq(species.id, slabs.speciesId)).where(eq(slabs.id, slabId));
   return row ?? null;
 }
 

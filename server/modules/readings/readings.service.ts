@@ -3,11 +3,11 @@ import { AppError, notFound, validationError } from '../../lib/errors';
 import { recordAudit } from '../../lib/audit';
 import type { SessionUser } from '../../lib/session';
 import {
-  airDryReadyDate, dryingStateFor, equilibriumMoistureContent, WoodMathError, type DryingState,
+  airDryReadyDate, dryingStateFor, equilibriumMoistureContent, maxMoistureContentPercent, WoodMathError, type DryingState,
 } from '../../../shared/wood/index';
 import {
-  batchReadingsSchema, createReadingSchema, type CreateReading, type MeterKind, type ReadingSaved,
-  type ReadingView, type SlabReadings,
+  batchReadingsSchema, createReadingSchema, READING_JUMP_CODE, readingJump, type CreateReading, type MeterKind,
+  type ReadingReview, type ReadingSaved, type ReadingView, type SlabReadings,
 } from '../../../shared/readings';
 import * as repo from './readings.repo';
 
@@ -23,7 +23,7 @@ export function parseId(raw: string, what: string): number {
 export const toView = (r: repo.ReadingRow): ReadingView => ({
   id: r.id, slabId: r.slabId, measuredOn: r.measuredOn, mcPercent: r.mcPercent, meterKind: r.meterKind as MeterKind,
   location: r.location, depthIn: r.depthIn, ambientTempF: r.ambientTempF, ambientRhPercent: r.ambientRhPercent,
-  recordedBy: r.recordedBy, createdAt: r.createdAt.toISOString(),
+  recordedBy: r.recordedBy, createdAt: r.createdAt.toISOString(), review: r.review as ReadingReview,
 });
 
 /** EMC of the air at the reading; null when the fit's published range does not cover the weather. */
@@ -55,24 +55,62 @@ async function refreshDryingState(tx: Tx, actor: Actor, slab: { id: number; dryi
   return next;
 }
 
-async function saveOne(tx: Tx, actor: Actor, slabId: number, input: CreateReading, targetMcPercent: number): Promise<ReadingSaved> {
+/** Field errors keyed like the request: "mcPercent" for one reading, "readings.2.mcPercent" in a round. */
+type Problems = { invalid: Record<string, string[]>; jumps: Record<string, string[]> };
+const fieldKey = (row: number | null, field: string) => (row === null ? field : `readings.${row}.${field}`);
+
+/**
+ * What the meter and the species allow, and whether the reading jumps from the slab's previous one.
+ * An oven-dry result above the species' maximum moisture content (every cell cavity full of water,
+ * Wood Handbook FPL-GTR-190 ch. 4) cannot be real, so it is refused; a jump only needs confirming.
+ */
+async function reviewReading(tx: Tx, slabId: number, input: CreateReading, row: number | null, problems: Problems): Promise<ReadingReview> {
+  if (input.meterKind === 'oven-dry') {
+    const sp = await repo.speciesOfSlab(tx, slabId);
+    const max = sp ? Math.floor(maxMoistureContentPercent(sp.basicSpecificGravity)) : null;
+    if (sp && max !== null && input.mcPercent > max) {
+      problems.invalid[fieldKey(row, 'mcPercent')] = [`${sp.name} can hold at most about ${max} % water even when every cell is full — check the weighing`];
+      return 'in-line';
+    }
+  }
+  const jump = readingJump(await repo.readingBefore(tx, slabId, input.measuredOn), input);
+  if (!jump) return 'in-line';
+  if (!input.confirmed) problems.jumps[fieldKey(row, 'mcPercent')] = [jump];
+  return 'confirmed';
+}
+
+function throwProblems({ invalid, jumps }: Problems) {
+  if (Object.keys(invalid).length) throw validationError(invalid, 'Some readings are not possible. Nothing was saved.');
+  if (Object.keys(jumps).length) {
+    throw new AppError(409, READING_JUMP_CODE, 'A reading jumps a long way from the slab\'s previous one. Check it, then confirm to save.', jumps);
+  }
+}
+
+async function saveOne(tx: Tx, actor: Actor, slabId: number, input: CreateReading, targetMcPercent: number, row: number | null, problems: Problems): Promise<ReadingSaved> {
   const slab = await repo.lockSlab(tx, slabId);
   if (!slab) throw notFound('That slab');
-  const row = await repo.insertReading(tx, {
+  const review = await reviewReading(tx, slabId, input, row, problems);
+  const row_ = await repo.insertReading(tx, {
     slabId, measuredOn: input.measuredOn, mcPercent: input.mcPercent, meterKind: input.meterKind, location: input.location,
     depthIn: input.depthIn ?? null, ambientTempF: input.ambientTempF ?? null, ambientRhPercent: input.ambientRhPercent ?? null,
-    recordedBy: actor.id,
+    recordedBy: actor.id, review,
   });
+  await recordAudit(tx, { actor, action: 'moisture-reading.create', entityType: 'slab', entityId: slab.id, before: null, after: toView(row_) });
   const dryingState = (await refreshDryingState(tx, actor, slab, targetMcPercent)) as DryingState;
   return {
-    reading: toView(row), slab: { id: slab.id, code: slab.code, dryingState, previousDryingState: slab.dryingState },
+    reading: toView(row_), slab: { id: slab.id, code: slab.code, dryingState, previousDryingState: slab.dryingState },
     targetMcPercent, emcPercent: emcFor(input),
   };
 }
 
 export async function addReading(db: Db, actor: Actor, slabId: number, body: unknown): Promise<ReadingSaved> {
   const input = createReadingSchema.parse(body);
-  return db.transaction(async (tx) => saveOne(tx, actor, slabId, input, await repo.readTargetMcPercent(tx)));
+  return db.transaction(async (tx) => {
+    const problems: Problems = { invalid: {}, jumps: {} };
+    const saved = await saveOne(tx, actor, slabId, input, await repo.readTargetMcPercent(tx), null, problems);
+    throwProblems(problems); // rolls the insert back
+    return saved;
+  });
 }
 
 /** Several slabs at once from the yard: every row is saved, or none is. */
@@ -98,8 +136,11 @@ export async function addBatch(db: Db, actor: Actor, body: unknown): Promise<{ i
     if (Object.keys(fieldErrors).length) throw validationError(fieldErrors, 'Some rows name a slab we do not have. Nothing was saved.');
     const target = await repo.readTargetMcPercent(tx);
     const items: ReadingSaved[] = [];
-    // One at a time: rows for the same slab must see each other when the drying state is worked out.
-    for (const [i, r] of readings.entries()) items.push(await saveOne(tx, actor, resolved[i], r, target));
+    const problems: Problems = { invalid: {}, jumps: {} };
+    // One at a time: rows for the same slab must see each other (jump check, drying state). Every row is
+    // checked before anything is refused, so the person sees all rows that need a look at once.
+    for (const [i, r] of readings.entries()) items.push(await saveOne(tx, actor, resolved[i], r, target, i, problems));
+    throwProblems(problems); // rolls every row back
     return { items };
   });
 }

@@ -1,11 +1,13 @@
 import { and, asc, desc, eq, gte, inArray, lte, ne, or, sql, ilike, type SQL } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
 import { logs, moistureReadings, slabPhotos, slabs, species } from '../../db/schema/index';
+import { shownPriceCents } from '../pricing/sold-price';
+import { vouchedFor } from '../readings/reading-visibility';
 import { AVAILABILITY, type SlabListQuery, type SlabStatus } from '../../../shared/slabs';
 
 const latestMoisture = sql<number | null>`(
   select ${moistureReadings.mcPercent} from ${moistureReadings}
-  where ${moistureReadings.slabId} = ${slabs.id}
+  where ${moistureReadings.slabId} = ${slabs.id} and ${vouchedFor}
   order by ${moistureReadings.measuredOn} desc, ${moistureReadings.id} desc limit 1)`;
 
 const coverKey = sql<string | null>`(
@@ -43,16 +45,28 @@ const orderFor = (sort: SlabListQuery['sort']) => {
   }
 };
 
+/** The columns a catalogue card needs. */
+const listColumns = {
+  id: slabs.id, code: slabs.code, speciesSlug: species.slug, speciesName: species.name,
+  thicknessIn: slabs.thicknessIn, widthIn: slabs.widthIn, lengthIn: slabs.lengthIn,
+  boardFeet: slabs.boardFeet, priceCents: shownPriceCents, status: slabs.status,
+  dryingState: slabs.dryingState, liveEdge: slabs.liveEdge, figures: slabs.figures,
+  logId: slabs.logId, sequenceInLog: slabs.sequenceInLog,
+  moisturePercent: latestMoisture, coverKey,
+};
+export type SlabListRow = Awaited<ReturnType<typeof findListRowsByIds>>[number];
+
+/** Catalogue cards for the given slabs (any status; callers decide what may be shown). */
+export function findListRowsByIds(db: Tx, ids: number[]) {
+  if (!ids.length) return Promise.resolve([]);
+  return db.select(listColumns).from(slabs).innerJoin(species, eq(species.id, slabs.speciesId)).where(inArray(slabs.id, ids));
+}
+
 export async function findSlabPage(db: Tx, q: SlabListQuery) {
   const where = whereFor(q);
   const rows = await db
     .select({
-      id: slabs.id, code: slabs.code, speciesSlug: species.slug, speciesName: species.name,
-      thicknessIn: slabs.thicknessIn, widthIn: slabs.widthIn, lengthIn: slabs.lengthIn,
-      boardFeet: slabs.boardFeet, priceCents: slabs.priceCents, status: slabs.status,
-      dryingState: slabs.dryingState, liveEdge: slabs.liveEdge, figures: slabs.figures,
-      logId: slabs.logId, sequenceInLog: slabs.sequenceInLog,
-      moisturePercent: latestMoisture, coverKey,
+      ...listColumns,
       // The total rides along with the page (one query instead of two).
       total: sql<number>`(count(*) over ())::int`,
     })
@@ -88,14 +102,14 @@ export function findPhotos(db: Tx, slabId: number) {
 }
 
 export function findReadings(db: Tx, slabId: number) {
-  return db.select().from(moistureReadings).where(eq(moistureReadings.slabId, slabId))
+  return db.select().from(moistureReadings).where(and(eq(moistureReadings.slabId, slabId), vouchedFor))
     .orderBy(asc(moistureReadings.measuredOn), asc(moistureReadings.id));
 }
 
 export function findLogSequence(db: Tx, logId: number) {
   return db
     .select({ id: slabs.id, code: slabs.code, sequenceInLog: slabs.sequenceInLog, status: slabs.status,
-      thicknessIn: slabs.thicknessIn, widthIn: slabs.widthIn, lengthIn: slabs.lengthIn, priceCents: slabs.priceCents, coverKey })
+      thicknessIn: slabs.thicknessIn, widthIn: slabs.widthIn, lengthIn: slabs.lengthIn, priceCents: shownPriceCents, coverKey })
     .from(slabs)
     .where(eq(slabs.logId, logId))
     .orderBy(asc(slabs.sequenceInLog));

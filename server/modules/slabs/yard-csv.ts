@@ -19,6 +19,8 @@ const COLUMNS: [string, (r: YardSlabRow) => string | number | null][] = [
   ['Board feet', (r) => r.boardFeet], ['Price', (r) => formatCents(r.priceCents)], ['Price set by hand', (r) => (r.priceOverrideCents === null ? '' : 'yes')],
   ['Stack', (r) => r.yardStack], ['Position', (r) => r.yardPosition], ['Live edge', (r) => r.liveEdge], ['Figures', (r) => r.figures.join(' ')],
   ['Moisture %', (r) => r.moisturePercent], ['Last reading', (r) => r.lastReadingOn], ['Photos', (r) => r.photoCount], ['Listed at', (r) => r.listedAt],
+  ['Air-dry expected', (r) => r.airDry?.expectedOn ?? ''], ['Air-dry earliest', (r) => r.airDry?.earliestOn ?? ''],
+  ['Air-dry latest', (r) => r.airDry?.latestOn ?? ''], ['Air-dry forecast basis', (r) => r.airDry?.basis ?? ''],
 ];
 
 export function yardSlabsCsv(rows: YardSlabRow[]): string {

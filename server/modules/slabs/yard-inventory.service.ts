@@ -7,7 +7,7 @@ import {
 } from '../../../shared/slab-input';
 import { SLAB_STATUSES, type SlabStatus } from '../../../shared/slabs';
 import { assertPublishable, assertStaffMove } from './yard-slabs.workflow';
-import { toYardRow } from './yard-slabs.service';
+import { withForecasts } from './yard-slabs.service';
 import * as repo from './yard-slabs.repo';
 
 function parseQuery(raw: Record<string, unknown>) {
@@ -18,16 +18,33 @@ function parseQuery(raw: Record<string, unknown>) {
 
 export async function listYardSlabs(db: Db, raw: Record<string, unknown>): Promise<YardSlabPage> {
   const q = parseQuery(raw);
-  const [{ rows, total }, counts] = await Promise.all([repo.findYardPage(db, q), repo.statusCounts(db)]);
+  const byForecast = q.sort === 'airDryExpectedOn';
+  const [{ rows, total }, counts] = await Promise.all([repo.findYardPage(db, q, { all: byForecast }), repo.statusCounts(db)]);
   const byStatus = Object.fromEntries(SLAB_STATUSES.map((s) => [s, 0])) as Record<SlabStatus, number>;
   for (const c of counts) byStatus[c.status as SlabStatus] = Number(c.count);
-  return { items: rows.map(toYardRow), total, page: q.page, pageSize: q.pageSize, counts: byStatus };
+  if (!byForecast) return { items: await withForecasts(db, rows), total, page: q.page, pageSize: q.pageSize, counts: byStatus };
+  // The expected date comes from each slab's readings, so this sort is done here over the whole filtered stock.
+  const sorted = sortByForecast(await withForecasts(db, rows), q.dir);
+  return { items: sorted.slice((q.page - 1) * q.pageSize, q.page * q.pageSize), total, page: q.page, pageSize: q.pageSize, counts: byStatus };
+}
+
+/** Soonest (or latest) expected air-dry date first; slabs with no date always last, then by code. */
+export function sortByForecast(rows: YardSlabRow[], dir: 'asc' | 'desc'): YardSlabRow[] {
+  const sign = dir === 'desc' ? -1 : 1;
+  return [...rows].sort((a, b) => {
+    const x = a.airDry?.expectedOn ?? null;
+    const y = b.airDry?.expectedOn ?? null;
+    if (x === null || y === null) return x === y ? a.code.localeCompare(b.code) : x === null ? 1 : -1;
+    return x === y ? a.code.localeCompare(b.code) : sign * (x < y ? -1 : 1);
+  });
 }
 
 /** Every row of the current filtered, sorted view (not only the visible page). */
 export async function yardSlabsForExport(db: Db, raw: Record<string, unknown>): Promise<YardSlabRow[]> {
-  const { rows } = await repo.findYardPage(db, parseQuery(raw), { all: true });
-  return rows.map(toYardRow);
+  const q = parseQuery(raw);
+  const { rows } = await repo.findYardPage(db, q, { all: true });
+  const withDates = await withForecasts(db, rows);
+  return q.sort === 'airDryExpectedOn' ? sortByForecast(withDates, q.dir) : withDates;
 }
 
 /**

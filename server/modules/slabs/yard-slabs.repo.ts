@@ -1,5 +1,6 @@
 import { and, asc, desc, eq, ilike, inArray, ne, or, sql, type SQL } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
+import { vouchedFor } from '../readings/reading-visibility';
 import { figureKinds, logs, moistureReadings, slabPhotos, slabs, species } from '../../db/schema/index';
 import type { YardSlabQuery, YardSort } from '../../../shared/slab-input';
 
@@ -13,7 +14,7 @@ const photoCount = sql<number>`(select count(*)::int from ${slabPhotos} where ${
 
 const rowColumns = {
   slab: slabs, speciesSlug: species.slug, speciesName: species.name, rate: species.ratePerBoardFootCents,
-  logCode: logs.code, moisturePercent, lastReadingOn, photoCount,
+  logCode: logs.code, milledOn: logs.milledOn, moisturePercent, lastReadingOn, photoCount,
 };
 
 const selectRows = (db: Tx) =>
@@ -48,7 +49,16 @@ const sortColumn: Record<YardSort, SQL> = {
   widthIn: sql`${slabs.widthIn}`, lengthIn: sql`${slabs.lengthIn}`, boardFeet: sql`${slabs.boardFeet}`,
   priceCents: sql`${slabs.priceCents}`, yardStack: sql`${slabs.yardStack}`, moisturePercent,
   photoCount, createdAt: sql`${slabs.createdAt}`, updatedAt: sql`${slabs.updatedAt}`, listedAt: sql`${slabs.listedAt}`,
+  // worked out from each slab's readings in the service, which sorts on it; the database keeps code order
+  airDryExpectedOn: sql`${slabs.code}`,
 };
+
+/** Every reading of the given slabs, oldest first, for the drying forecasts. */
+export function readingsForSlabs(db: Tx, ids: number[]) {
+  if (!ids.length) return Promise.resolve([]);
+  return db.select({ slabId: moistureReadings.slabId, measuredOn: moistureReadings.measuredOn, mcPercent: moistureReadings.mcPercent })
+    .from(moistureReadings).where(inArray(moistureReadings.slabId, ids)).orderBy(asc(moistureReadings.measuredOn), asc(moistureReadings.id));
+}
 
 export async function findYardPage(db: Tx, q: YardSlabQuery, { all = false } = {}) {
   const where = whereFor(q);
@@ -106,7 +116,7 @@ export async function existingFigureSlugs(tx: Tx, slugs: string[]) {
 
 export async function latestReadingOf(tx: Tx, slabId: number) {
   const [row] = await tx.select({ mcPercent: moistureReadings.mcPercent, measuredOn: moistureReadings.measuredOn })
-    .from(moistureReadings).where(eq(moistureReadings.slabId, slabId))
+    .from(moistureReadings).where(and(eq(moistureReadings.slabId, slabId), vouchedFor))
     .orderBy(desc(moistureReadings.measuredOn), desc(moistureReadings.id)).limit(1);
   return row ?? null;
 }

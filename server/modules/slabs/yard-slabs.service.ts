@@ -4,13 +4,14 @@ import { recordAudit } from '../../lib/audit';
 import type { SessionUser } from '../../lib/session';
 import { dryingStateFor, roundBoardFeet } from '../../../shared/wood/index';
 import { createSlabSchema, updateSlabSchema, type YardSlabDetail, type YardSlabRow } from '../../../shared/slab-input';
-import type { SlabStatus } from '../../../shared/slabs';
+import { isSold, type SlabStatus } from '../../../shared/slabs';
 import { loadPricingRules } from '../pricing/pricing.service';
 import { readMillSettings } from '../pricing/pricing.repo';
 import { isUniqueViolation } from '../logs/logs.repo';
 import { derivedSlabColumns } from './slab-derived';
 import { assertPublishable, assertStaffMove } from './yard-slabs.workflow';
 import * as repo from './yard-slabs.repo';
+import { forecastAirDry } from './drying-forecast';
 
 type Row = NonNullable<Awaited<ReturnType<typeof repo.findYardRow>>>;
 
@@ -23,14 +24,27 @@ export function toYardRow({ slab, speciesSlug, speciesName, logCode, moisturePer
     yardStack: slab.yardStack, yardPosition: slab.yardPosition, liveEdge: slab.liveEdge, figures: slab.figures,
     moisturePercent: moisturePercent === null ? null : Number(moisturePercent), lastReadingOn, photoCount: Number(photoCount),
     createdAt: slab.createdAt.toISOString(), updatedAt: slab.updatedAt.toISOString(), listedAt: slab.listedAt?.toISOString() ?? null,
+    airDry: null,
   };
+}
+
+/** Yard rows with their air-dry forecasts, from each slab's own readings. */
+export async function withForecasts(db: Tx, rows: Row[]): Promise<YardSlabRow[]> {
+  const readings = await repo.readingsForSlabs(db, rows.map((r) => r.slab.id));
+  const bySlab = new Map<number, { measuredOn: string; mcPercent: number }[]>();
+  for (const r of readings) bySlab.set(r.slabId, [...(bySlab.get(r.slabId) ?? []), r]);
+  return rows.map((row) => {
+    const f = forecastAirDry({ readings: bySlab.get(row.slab.id) ?? [], thicknessIn: row.slab.thicknessIn, milledOn: row.milledOn });
+    return { ...toYardRow(row), airDry: { expectedOn: f.expectedOn, earliestOn: f.earliestOn, latestOn: f.latestOn, basis: f.basis, method: f.method } };
+  });
 }
 
 export async function getYardSlab(db: Tx, id: number): Promise<YardSlabDetail> {
   const row = await repo.findYardRow(db, id);
   if (!row) throw notFound('That slab');
+  const [withForecast] = await withForecasts(db, [row]);
   return {
-    ...toYardRow(row), figureNotes: row.slab.figureNotes, defects: row.slab.defects as YardSlabDetail['defects'],
+    ...withForecast, figureNotes: row.slab.figureNotes, defects: row.slab.defects as YardSlabDetail['defects'],
     description: row.slab.description, priceOverrideReason: row.slab.priceOverrideReason, speciesRatePerBoardFootCents: row.rate,
   };
 }
@@ -120,7 +134,9 @@ export async function updateSlab(db: Db, id: number, raw: unknown, actor: Sessio
       thicknessIn: input.thicknessIn ?? slab.thicknessIn, widthsIn: input.widthsIn ?? slab.widthsIn,
       lengthIn: input.lengthIn ?? slab.lengthIn, figures: input.figures ?? slab.figures,
     };
-    const derived = derivedSlabColumns({ ...measures, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason }, await repo.speciesRate(tx, slab.speciesId), await loadPricingRules(tx));
+    const worked = derivedSlabColumns({ ...measures, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason }, await repo.speciesRate(tx, slab.speciesId), await loadPricingRules(tx));
+    // A sold slab keeps the price it sold at, whatever is corrected on its record afterwards.
+    const derived = isSold(from) ? { ...worked, priceCents: slab.priceCents } : worked;
     const { status: _s, priceOverrideCents: _c, priceOverrideReason: _r, ...rest } = input;
     const after = await repo.updateSlab(tx, id, {
       ...rest, ...measures, ...derived, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason,

@@ -18,7 +18,11 @@ type Created = Pick<HoldView, 'id' | 'slabId' | 'groupId' | 'expiresAt'>;
 /** Reserving changes the slab's status too, so catalogue data is refreshed (by its key prefix). */
 function useInvalidateAfterHold() {
   const qc = useQueryClient();
-  return () => Promise.all([qc.invalidateQueries({ queryKey: holdKeys.all }), qc.invalidateQueries({ queryKey: ['slabs'] })]);
+  return () => Promise.all([
+    qc.invalidateQueries({ queryKey: holdKeys.all }), qc.invalidateQueries({ queryKey: ['slabs'] }),
+    // The buyer's marks on slabs (saved, waiting, own holds) change with a hold too.
+    qc.invalidateQueries({ queryKey: ['buyer-lists'] }),
+  ]);
 }
 
 export function useHoldSlab() {

@@ -2,7 +2,8 @@ import { queryOptions, useMutation, useQueryClient, type QueryClient } from '@ta
 import { redirect } from 'react-router';
 import { apiFetch, ApiError } from '../../lib/api-client';
 import { paths } from '../../paths';
-import type { ChangePasswordInput, ForgotPasswordInput, SignInInput, SignUpInput } from '../../../shared/accounts';
+import type { ChangeEmailInput, ChangePasswordInput, ForgotPasswordInput, SignInInput, SignUpInput, UpdateNameInput } from '../../../shared/accounts';
+import type { Preferences, PreferencesInput } from '../../../shared/preferences';
 
 export type Role = 'buyer' | 'seller' | 'admin';
 export type Me = { id: string; email: string; name: string; role: Role };
@@ -120,5 +121,40 @@ export function useResetPassword() {
   return useMutation({
     mutationFn: ({ token, newPassword }: { token: string; newPassword: string }) =>
       authPost('/reset-password', { token, newPassword }),
+  });
+}
+
+export function useUpdateName() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ name }: UpdateNameInput) => authPost('/update-user', { name }),
+    onSuccess: () => queryClient.fetchQuery({ ...meQuery(), staleTime: 0 }),
+  });
+}
+
+/** Sends a confirmation link to the new address; the account keeps its old one until it is opened. */
+export function useChangeEmail() {
+  return useMutation({
+    mutationFn: ({ newEmail }: ChangeEmailInput) => authPost('/change-email', { newEmail, callbackURL: `${paths.account()}?email=changed` }),
+  });
+}
+
+// --- display preferences kept on the account ---
+
+export const preferencesKeys = { mine: ['preferences'] as const };
+
+export const preferencesQuery = () =>
+  queryOptions({
+    queryKey: preferencesKeys.mine,
+    queryFn: () => apiFetch<Preferences>('/api/me/preferences'),
+    staleTime: 5 * 60_000,
+  });
+
+export function useSavePreferences() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: PreferencesInput) => apiFetch<Preferences>('/api/me/preferences', { method: 'PUT', body: input }),
+    onMutate: (input) => { queryClient.setQueryData(preferencesKeys.mine, { units: input.units }); },
+    onSuccess: (saved) => { queryClient.setQueryData(preferencesKeys.mine, saved); },
   });
 }

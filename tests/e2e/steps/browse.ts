@@ -1,5 +1,6 @@
 import { expect } from 'vitest';
 import type { Page } from 'playwright-core';
+import { parseInches } from '../../../shared/wood/index';
 
 export type OpenedSlab = { code: string; url: string; id: number };
 
@@ -19,7 +20,7 @@ export async function browseToSlab(page: Page, filter: { species: string; minThi
   if (await disclosure.isVisible()) await disclosure.click();
   await filters.getByRole('combobox', { name: 'Species' }).selectOption({ label: filter.species });
   await page.waitForURL(/species=/);
-  const thickness = filters.getByRole('spinbutton', { name: 'Thickness from (in)' });
+  const thickness = filters.getByRole('textbox', { name: 'Thickness from (in)' });
   await thickness.fill(filter.minThicknessIn);
   await thickness.press('Enter');
   await page.waitForURL(/minThicknessIn=/);
@@ -31,7 +32,7 @@ export async function browseToSlab(page: Page, filter: { species: string; minThi
   }, { timeout: 10_000 }).toBe(true);
   // Every card's stated thickness honours the filter (the card labels its measures in inches).
   const labels = await slabs.locator('[aria-label^="thickness "]').evaluateAll((els) => els.map((e) => e.getAttribute('aria-label') ?? ''));
-  for (const label of labels) expect(Number(/thickness ([\d.]+) inches/.exec(label)?.[1])).toBeGreaterThanOrEqual(Number(filter.minThicknessIn));
+  for (const label of labels) expect(Number(/thickness ([\d.]+) inches/.exec(label)?.[1])).toBeGreaterThanOrEqual(parseInches(filter.minThicknessIn, { thickness: true }));
 
   // A buyer about to reserve skips cards already on hold for someone else.
   const card = filter.forSale ? cards.filter({ has: page.getByText('For sale', { exact: true }) }).first() : cards.first();

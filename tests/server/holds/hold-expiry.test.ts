@@ -27,10 +27,10 @@ describe('expired holds', () => {
     expect(h.status).toBe('expired');
     expect((await t.db.select().from(slabs).where(eq(slabs.id, slab.id)))[0].status).toBe('listed');
     const queued = await t.db.select().from(emailOutbox).where(eq(emailOutbox.toAddress, buyer.email));
-    expect(queued.map((q) => q.kind)).toEqual(['hold-expired']);
+    expect(queued.map((q) => q.kind)).toEqual(['hold-placed', 'hold-expired']);
 
     await flushOutbox(t.db, t.mailer);
-    const mail = await waitForMail(buyer.email, (m) => m.subject.includes(slab.code));
+    const mail = await waitForMail(buyer.email, (m) => m.subject.includes(slab.code) && m.subject.includes('ended'));
     expect(mail.text).toContain('Wren Callow');
     expect(mail.text).toContain('back on sale');
   });

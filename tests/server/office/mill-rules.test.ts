@@ -51,7 +51,7 @@ describe('the mill\'s prices and rules', () => {
     const slab = await slabRow(t.db, log, { figures: ['crotch'] });
     expect((await put(admin.agent, rules({ figurePremiums: { crotch: 2 } }))).status).toBe(200);
     const res = await request(t.app).get(`/api/slabs/${slab.id}`);
-    expect(res.body.priceBreakdown.lines.find((l: { code: string }) => l.code === 'figure').label).toMatch(/×2/);
+    expect(res.body.priceBreakdown.lines.find((l: { code: string }) => l.code === 'figure').label).toMatch(/100 % of/); // ×2 is a 100 % premium on the base
   });
 
   it('answers 400 with field messages for bad rules and unknown names, and saves nothing', async () => {

@@ -48,7 +48,7 @@ describe('POST /api/slabs/:id/moisture-readings', () => {
   });
 
   it('when air temperature and humidity are given, it also answers the EMC from the shared formula', async () => {
-    const slab = await slabRow(t.db, log, { photo: false });
+    const slab = await slabRow(t.db, log, { photo: false, mc: null });
     const res = await seller.agent.post(`/api/slabs/${slab.id}/moisture-readings`).set('Origin', TEST_ORIGIN)
       .send(reading({ ambientTempF: 70, ambientRhPercent: 65 }));
     expect(res.status).toBe(201);
@@ -62,7 +62,7 @@ describe('POST /api/slabs/:id/moisture-readings', () => {
     const slab = await slabRow(t.db, log, { mc: null, photo: false, dryingState: 'green' });
     await seller.agent.post(`/api/slabs/${slab.id}/moisture-readings`).set('Origin', TEST_ORIGIN).send(reading({ mcPercent: 9 }));
     const res = await seller.agent.post(`/api/slabs/${slab.id}/moisture-readings`).set('Origin', TEST_ORIGIN)
-      .send(reading({ measuredOn: '2024-06-01', mcPercent: 45 }));
+      .send(reading({ measuredOn: '2024-06-01', mcPercent: 45, meterKind: 'oven-dry' }));
     expect(res.status).toBe(201);
     expect(res.body.slab.dryingState).toBe('shop-dry');
   });
@@ -109,7 +109,7 @@ describe('GET /api/slabs/:id/moisture-readings', () => {
 describe('DELETE /api/moisture-readings/:id', () => {
   it('removes the reading, records it in the audit log and recomputes the drying state from what is left', async () => {
     const slab = await slabRow(t.db, log, { mc: 25, photo: false, dryingState: 'air-drying' });
-    const added = await seller.agent.post(`/api/slabs/${slab.id}/moisture-readings`).set('Origin', TEST_ORIGIN).send(reading({ mcPercent: 9 }));
+    const added = await seller.agent.post(`/api/slabs/${slab.id}/moisture-readings`).set('Origin', TEST_ORIGIN).send(reading({ mcPercent: 9, confirmed: true }));
     expect(await slabState(slab.id)).toBe('shop-dry');
     const res = await seller.agent.delete(`/api/moisture-readings/${added.body.reading.id}`).set('Origin', TEST_ORIGIN);
     expect(res.status).toBe(200);

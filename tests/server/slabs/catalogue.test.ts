@@ -104,7 +104,12 @@ describe('GET /api/slabs/:id', () => {
     expect(s.photos).toHaveLength(1);
     expect(s.priceBreakdown.lines.reduce((a: number, l: { amountCents: number }) => a + l.amountCents, 0)).toBe(s.priceBreakdown.totalCents);
     expect(s.weightLb).toBeGreaterThan(50);
-    expect(s.lifting.peopleNeeded).toBeGreaterThanOrEqual(2);
+    // well over the NIOSH Pub. 94-110 recommended limit for a slab lift, so no hand crew is advised
+    expect(s.lifting).toMatchObject({ tier: 'equipment', needsEquipment: true, peopleNeeded: 0 });
+    expect(s.lifting.basis).toMatch(/NIOSH Pub\. 94-110/);
+    expect(s.weightBasis).toBe('reading');
+    expect(s.dryingForecast).toMatchObject({ basis: expect.stringMatching(/rule-of-thumb|not-enough-data|already-reached/) });
+    expect(s.dryingForecast.method.length).toBeGreaterThan(20);
   });
 
   it('answers 404 JSON for an unknown, malformed or withdrawn slab', async () => {

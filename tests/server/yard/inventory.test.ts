@@ -3,7 +3,7 @@ import request from 'supertest';
 import { eq, inArray } from 'drizzle-orm';
 import { createTestApp, TEST_ORIGIN, type TestApp } from '../../helpers/test-app';
 import { logRow, slabRow } from '../../helpers/fixtures';
-import { auditLog, slabs } from '../../../server/db/schema/index';
+import { auditLog, moistureReadings, slabs } from '../../../server/db/schema/index';
 import { csvField } from '../../../server/modules/slabs/yard-csv';
 
 let t: TestApp;
@@ -116,5 +116,33 @@ describe('POST /api/yard/slabs/bulk', () => {
     expect(res.body.error.fieldErrors.stack).toBeDefined();
     const bad = await seller.post('/api/yard/slabs/bulk').set('Origin', TEST_ORIGIN).send({ ids: [], action: 'burn' });
     expect(Object.keys(bad.body.error.fieldErrors).sort()).toEqual(['action', 'ids']);
+  });
+});
+
+describe('air-dry forecasts on the yard desk (runs last: it adds slabs)', () => {
+  it('gives each slab an air-dry forecast and sorts drying stock by its expected date', async () => {
+    // Log milled 2023-04-01; slabs without readings fall back to one year per inch (common practice):
+    // 1.5 in → 2024-10-01, 2 in → 2025-04-01, 3 in → 2026-04-01. One slab gets three readings on an exact exponential
+    // curve toward a 12 % EMC (k = 0.02/day from 60 %), which reaches 20 % on day 90 (ln(48/8)/0.02 = 89.6): 2025-06-30.
+    const log = await logRow(t.db, 'black-cherry', { code: 'L-2026-09', milledOn: '2023-04-01' });
+    const thin = (await slabRow(t.db, log, { status: 'drying', thicknessIn: 1.5, mc: null })).id;
+    const mid = (await slabRow(t.db, log, { status: 'drying', thicknessIn: 2, mc: null })).id;
+    const thick = (await slabRow(t.db, log, { status: 'drying', thicknessIn: 3, mc: null })).id;
+    const fitted = (await slabRow(t.db, log, { status: 'drying', thicknessIn: 2.5, mc: null })).id;
+    const day = (n: number) => new Date(Date.UTC(2025, 3, 1) + n * 86_400_000).toISOString().slice(0, 10);
+    await t.db.insert(moistureReadings).values([0, 20, 45].map((d) => ({
+      slabId: fitted, measuredOn: day(d), mcPercent: 12 + 48 * Math.exp(-0.02 * d), meterKind: 'pin',
+    })));
+    const res = await seller.get(`/api/yard/slabs?log=${log.id}&sort=airDryExpectedOn`);
+    expect(res.status).toBe(200);
+    const rows = res.body.items as { id: number; airDry: { expectedOn: string; basis: string; earliestOn: string; latestOn: string } }[];
+    expect(rows.map((r) => r.id)).toEqual([thin, mid, fitted, thick]);
+    expect(rows.map((r) => r.airDry.expectedOn)).toEqual(['2024-10-01', '2025-04-01', '2025-06-30', '2026-04-01']);
+    const f = rows[2].airDry;
+    expect(f.basis).toBe('fitted-curve');
+    expect(f.earliestOn <= f.expectedOn && f.expectedOn <= f.latestOn).toBe(true);
+    expect(rows[0].airDry.basis).toBe('rule-of-thumb');
+    const desc = (await seller.get(`/api/yard/slabs?log=${log.id}&sort=airDryExpectedOn&dir=desc&pageSize=2&page=1`)).body.items.map((r: { id: number }) => r.id);
+    expect(desc).toEqual([thick, fitted]);
   });
 });

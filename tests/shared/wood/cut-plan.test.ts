@@ -66,3 +66,11 @@ describe('cutPlan', () => {
     expect(() => cutPlan({ diameterIn: 24, greenThicknessIn: 2, kerfIn: -0.1, speciesSlug: 'black-walnut' })).toThrow(WoodMathError);
   });
 });
+
+describe('cutPlan limits', () => {
+  it('refuses absurd logs and kerfs instead of planning millions of slabs', () => {
+    expect(() => cutPlan({ diameterIn: 1e9, greenThicknessIn: 2, speciesSlug: 'black-walnut' })).toThrow(/diameterIn/);
+    expect(() => cutPlan({ diameterIn: 24, greenThicknessIn: 1e6, speciesSlug: 'black-walnut' })).toThrow(/greenThicknessIn/);
+    expect(() => cutPlan({ diameterIn: 24, greenThicknessIn: 2, kerfIn: 50, speciesSlug: 'black-walnut' })).toThrow(/kerfIn/);
+  });
+});

@@ -60,3 +60,11 @@ describe('dryingStateFor', () => {
     for (const s of DRYING_STATES) expect(s.description.length).toBeGreaterThan(30);
   });
 });
+
+describe('airDryReadyDate limits', () => {
+  it('refuses an absurd thickness or date instead of returning an invalid date', () => {
+    expect(() => airDryReadyDate({ milledOn: '2024-01-01', thicknessIn: 1e6 })).toThrow(/thicknessIn/);
+    expect(() => airDryReadyDate({ milledOn: '275760-01-01', thicknessIn: 2 })).toThrow(/milledOn/);
+    expect(() => airDryReadyDate({ milledOn: '2024-02-30', thicknessIn: 2 })).toThrow(/milledOn/);
+  });
+});

@@ -98,3 +98,15 @@ describe('maxMoistureContentPercent', () => {
     expect(maxMoistureContentPercent(0.6)).toBeCloseTo(101.7, 1);
   });
 });
+
+describe('moisture content upper limits', () => {
+  it('refuses a moisture content more water than any wood can hold', async () => {
+    const { ABSOLUTE_MAX_MOISTURE_CONTENT_PERCENT, dryingStateFor, maxMoistureContentPercent } = await import('../../../shared/wood');
+    // maximum MC equation (Wood Handbook FPL-GTR-190 ch. 4) at G_b 0.10, lighter than any commercial timber: about 935 %
+    expect(ABSOLUTE_MAX_MOISTURE_CONTENT_PERCENT).toBeCloseTo(maxMoistureContentPercent(0.1), 9);
+    expect(ABSOLUTE_MAX_MOISTURE_CONTENT_PERCENT).toBeCloseTo(935.1, 1);
+    expect(() => moistureContentPercent({ wetMass: 1e9, ovenDryMass: 1 })).toThrow(/wetMass/);
+    expect(() => moistureContentPercent({ wetMass: 1e300, ovenDryMass: 1e-300 })).toThrow(WoodMathError);
+    expect(() => dryingStateFor({ mcPercent: 5000, targetMcPercent: 8 })).toThrow(/mcPercent/);
+  });
+});

@@ -1,83 +1,145 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { dimensionalChangeDetail, dimensionalChangeIn, getSpecies, WoodMathError } from '../../../shared/wood';
+import {
+  dimensionalChangeDetail, dimensionalChangeIn, getSpecies, MOVEMENT_METHOD_NOTE, SPECIES, speciesMaxMoistureContentPercent, WoodMathError,
+} from '../../../shared/wood';
 
-describe('dimensionalChangeIn, coefficient method (6–14 % MC)', () => {
-  it('shrinks a 12 in flatsawn black walnut board 0.197 in from 12 % to 6 %', () => {
-    // WH2010 Table 13-5 C_T 0.00274 (read), REFERENCES worked example; tolerance ±0.001 in
-    const change = dimensionalChangeIn({ dimensionIn: 12, speciesSlug: 'black-walnut', grain: 'flatsawn', fromMcPercent: 12, toMcPercent: 6 });
-    expect(Math.abs(change - -0.197)).toBeLessThanOrEqual(0.001);
+// One model throughout: size at MC x = green size × (1 − S_x/100), S_x = S₀(1 − x/30) below fiber saturation
+// (USDA FPL Wood Handbook FPL-GTR-282 (2021) Eq. 4-9), S₀ = the species' own green → oven-dry shrinkage
+// (Wood Handbook FPL-GTR-190 (2010) Table 4-3); fiber saturation about 30 % MC (FPL-GTR-190 p. 4-2).
+const slugs = SPECIES.map((s) => s.slug);
+const grains = ['flatsawn', 'quartersawn'] as const;
+const move = (slug: string, grain: 'flatsawn' | 'quartersawn', width: number, from: number, to: number) =>
+  dimensionalChangeIn({ dimensionIn: width, speciesSlug: slug, grain, fromMcPercent: from, toMcPercent: to });
+
+describe('dimensionalChangeIn: one continuous model from oven-dry to fiber saturation', () => {
+  it('has no jump at 14 % MC for a 24 in flatsawn northern red oak board', () => {
+    // Table 4-3 northern red oak, tangential 8.6 % (quoted); Eq. 4-9. Tolerance: 0.01 point of MC moves it < 0.001 in.
+    const at14 = move('northern-red-oak', 'flatsawn', 24, 6, 14);
+    const at1401 = move('northern-red-oak', 'flatsawn', 24, 6, 14.01);
+    expect(Math.abs(at1401 - at14)).toBeLessThan(0.001);
+    // By hand: 24 × [(1 − 8.6·(16/30)/100) / (1 − 8.6·(24/30)/100) − 1] = 0.591 in (±0.001 in)
+    expect(Math.abs(at14 - 24 * ((1 - (8.6 * 16) / 3000) / (1 - (8.6 * 24) / 3000) - 1))).toBeLessThan(1e-9);
+    expect(Math.abs(at14 - 0.591)).toBeLessThanOrEqual(0.001);
   });
 
-  it.each([
-    // [species, grain, width, from, to, expected] — WH2010 Table 13-5 (read), ΔD = D·C·ΔMC; tolerance ±1e-6 in
-    ['white-oak', 'quartersawn', 10, 6, 14, 0.144], // C_R 0.00180
-    ['black-cherry', 'flatsawn', 8, 12, 6, -0.11904], // C_T 0.00248
-    ['sugar-maple', 'quartersawn', 10, 8, 12, 0.066], // C_R 0.00165
-  ] as const)('moves %s %s %s in from %s to %s percent MC by %s in', (slug, grain, width, from, to, expected) => {
-    const detail = dimensionalChangeDetail({ dimensionIn: width, speciesSlug: slug, grain, fromMcPercent: from, toMcPercent: to });
-    expect(detail.method).toBe('coefficient');
-    expect(Math.abs(detail.changeIn - expected)).toBeLessThanOrEqual(1e-6);
+  it('swells more from 6 → 15 % than from 6 → 14 %', () => {
+    // monotonic below fiber saturation (Eq. 4-9 is linear in MC)
+    expect(move('northern-red-oak', 'flatsawn', 24, 6, 15)).toBeGreaterThan(move('northern-red-oak', 'flatsawn', 24, 6, 14));
+  });
+
+  it('gives the same size drying 20 → 8 % directly as through 14 %', () => {
+    // path independence: the change is a ratio of sizes at the two MCs (Eq. 4-9); tolerance 1e-12 in
+    const direct = move('northern-red-oak', 'flatsawn', 24, 20, 8);
+    const first = move('northern-red-oak', 'flatsawn', 24, 20, 14);
+    const second = move('northern-red-oak', 'flatsawn', 24 + first, 14, 8);
+    expect(Math.abs(first + second - direct)).toBeLessThan(1e-12);
+  });
+
+  it('is continuous in both moisture contents, for every species and grain (property)', () => {
+    fc.assert(fc.property(fc.constantFrom(...slugs), fc.constantFrom(...grains),
+      fc.double({ min: 0, max: 60, noNaN: true }), fc.double({ min: 0, max: 60, noNaN: true }), fc.double({ min: -1e-4, max: 1e-4, noNaN: true }),
+      (slug, grain, a, b, eps) => {
+        const to = Math.max(0, b + eps);
+        // |d change / d MC| ≤ width × S₀/3000 ÷ (1 − S₀/100) < 0.1 in per point of MC for a 24 in board (S₀ ≤ 10.5 %)
+        expect(Math.abs(move(slug, grain, 24, a, to) - move(slug, grain, 24, a, b))).toBeLessThanOrEqual(0.1 * Math.abs(to - b) + 1e-9);
+      }));
+  });
+
+  it('never shrinks when the wood gets wetter, never swells when it gets drier (property)', () => {
+    fc.assert(fc.property(fc.constantFrom(...slugs), fc.constantFrom(...grains),
+      fc.double({ min: 0, max: 60, noNaN: true }), fc.double({ min: 0, max: 60, noNaN: true }), fc.double({ min: 0, max: 60, noNaN: true }),
+      (slug, grain, from, x, y) => {
+        const [lo, hi] = x <= y ? [x, y] : [y, x];
+        expect(move(slug, grain, 20, from, hi)).toBeGreaterThanOrEqual(move(slug, grain, 20, from, lo) - 1e-12);
+        if (Math.min(hi, 30) - Math.min(lo, 30) > 0.01) {
+          expect(move(slug, grain, 20, from, hi)).toBeGreaterThan(move(slug, grain, 20, from, lo));
+        }
+      }));
+  });
+
+  it('ends at the same size by A → C as by A → B → C (property)', () => {
+    fc.assert(fc.property(fc.constantFrom(...slugs), fc.constantFrom(...grains),
+      fc.double({ min: 0, max: 60, noNaN: true }), fc.double({ min: 0, max: 60, noNaN: true }), fc.double({ min: 0, max: 60, noNaN: true }),
+      fc.double({ min: 1, max: 60, noNaN: true }),
+      (slug, grain, a, b, c, width) => {
+        const ab = move(slug, grain, width, a, b);
+        const bc = move(slug, grain, width + ab, b, c);
+        expect(Math.abs(ab + bc - move(slug, grain, width, a, c))).toBeLessThanOrEqual(1e-9);
+      }));
+  });
+
+  it('does not change size above fiber saturation and says which model and source it used', () => {
+    // fiber saturation about 30 % MC, no shrinkage above it (WH2010 p. 4-2, read)
+    const detail = dimensionalChangeDetail({ dimensionIn: 20, speciesSlug: 'white-oak', grain: 'flatsawn', fromMcPercent: 80, toMcPercent: 35 });
+    expect(detail.changeIn).toBe(0);
+    expect(detail.method).toBe('shrinkage-from-green');
+    expect(detail.note).toContain(MOVEMENT_METHOD_NOTE);
+    expect(detail.note).toMatch(/Table 4-3/);
+    expect(detail.note).toMatch(/Eq\. 4-9/);
   });
 });
 
-describe('dimensionalChangeIn, shrinkage-from-green method', () => {
+describe('dimensionalChangeIn against the published tables', () => {
   it.each([
-    // WH2010 Table 4-3 green → oven-dry shrinkage (read); tolerance ±1e-6 in
+    // Wood Handbook FPL-GTR-190 Table 4-3 green → oven-dry shrinkage (read); tolerance ±1e-6 in
     ['black-walnut', 'flatsawn', 10, 40, 0, -0.78], // T 7.8 %
     ['white-oak', 'quartersawn', 10, 30, 0, -0.56], // R 5.6 %
     ['sweetgum', 'flatsawn', 100, 60, 0, -10.2], // T 10.2 %
   ] as const)('shrinks %s %s %s in from %s to %s percent MC by %s in, its full Table 4-3 shrinkage', (slug, grain, width, from, to, expected) => {
-    const detail = dimensionalChangeDetail({ dimensionIn: width, speciesSlug: slug, grain, fromMcPercent: from, toMcPercent: to });
-    expect(detail.method).toBe('shrinkage-from-green');
-    expect(Math.abs(detail.changeIn - expected)).toBeLessThanOrEqual(1e-6);
+    expect(Math.abs(move(slug, grain, width, from, to) - expected)).toBeLessThanOrEqual(1e-6);
   });
 
   it('scales shrinkage linearly below fiber saturation: green walnut to 15 % loses half its tangential shrinkage', () => {
     // WH2021 Eq. 4-9 (quoted), S_15 = 7.8 × (1 − 15/30) = 3.9 %; tolerance ±1e-6 in
-    const change = dimensionalChangeIn({ dimensionIn: 10, speciesSlug: 'black-walnut', grain: 'flatsawn', fromMcPercent: 30, toMcPercent: 15 });
-    expect(Math.abs(change - -0.39)).toBeLessThanOrEqual(1e-6);
+    expect(Math.abs(move('black-walnut', 'flatsawn', 10, 30, 15) - -0.39)).toBeLessThanOrEqual(1e-6);
   });
 
-  it('does not change size above fiber saturation and says so', () => {
-    // fiber saturation about 30 % MC, no shrinkage above it (WH2010 p. 4-2, read)
-    const detail = dimensionalChangeDetail({ dimensionIn: 20, speciesSlug: 'white-oak', grain: 'flatsawn', fromMcPercent: 80, toMcPercent: 35 });
-    expect(detail.changeIn).toBe(0);
-    expect(detail.note).toMatch(/fiber saturation/);
-  });
-
-  it('agrees with the Table 13-5 coefficients within 3 % where both tables were read', () => {
-    // WH2010 Table 13-5 vs Table 4-3 + WH2021 Eq. 4-9, 12 % → 6 %; tolerance 3 % of the coefficient result
-    for (const slug of ['black-walnut', 'black-cherry', 'sweetgum', 'american-sycamore']) {
-      for (const grain of ['flatsawn', 'quartersawn'] as const) {
-        const s = getSpecies(slug);
+  it('agrees within 3 % with Table 13-5 (ΔD = D·C·ΔMC, 6–14 % MC) where the coefficients are the species’ own row', () => {
+    // Wood Handbook FPL-GTR-190 Table 13-5 (read for these species) vs Table 4-3 + Eq. 4-9; tolerance 3 % of the Table 13-5 figure.
+    // e.g. 12 in flatsawn black walnut 12 → 6 %: 12 × 0.00274 × (−6) = −0.197 in by Table 13-5.
+    expect(Math.abs(move('black-walnut', 'flatsawn', 12, 12, 6) - -0.197)).toBeLessThanOrEqual(0.03 * 0.197);
+    for (const slug of ['black-walnut', 'black-cherry', 'sweetgum', 'american-sycamore', 'sugar-maple']) {
+      const s = getSpecies(slug);
+      expect(s.coefficientRow.kind).toBe('species');
+      for (const grain of grains) {
         const c = grain === 'flatsawn' ? s.tangentialCoefficient : s.radialCoefficient;
-        const fromCoefficient = 10 * c * -6;
-        const shrink = grain === 'flatsawn' ? s.shrinkage.tangential : s.shrinkage.radial;
-        const fromGreen = 10 * ((1 - (shrink * 0.8) / 100) / (1 - (shrink * 0.6) / 100) - 1);
-        expect(Math.abs(fromGreen - fromCoefficient)).toBeLessThanOrEqual(0.03 * Math.abs(fromCoefficient));
+        for (const [from, to] of [[12, 6], [8, 12], [6, 14]]) {
+          const table135 = 10 * c * (to - from);
+          expect(Math.abs(move(slug, grain, 10, from, to) - table135)).toBeLessThanOrEqual(0.03 * Math.abs(table135));
+        }
       }
     }
   });
 
-  it('shrinks when drying, swells when wetting, and returns to size after a round trip', () => {
-    fc.assert(fc.property(fc.double({ min: 0, max: 60, noNaN: true }), fc.double({ min: 0, max: 60, noNaN: true }), (a, b) => {
-      const base = { speciesSlug: 'red-maple', grain: 'flatsawn' as const };
-      const there = dimensionalChangeIn({ ...base, dimensionIn: 10, fromMcPercent: a, toMcPercent: b });
-      const detail = dimensionalChangeDetail({ ...base, dimensionIn: 10 + there, fromMcPercent: b, toMcPercent: a });
-      if (detail.method === 'shrinkage-from-green') expect(Math.abs(there + detail.changeIn)).toBeLessThanOrEqual(1e-9);
-      const wetter = Math.min(b, 30) - Math.min(a, 30);
-      if (Math.abs(wetter) > 0.01) expect(there * wetter).toBeGreaterThan(0); // swells when wetter, shrinks when drier
-    }));
+  it('labels the oak coefficients as Table 13-5 group rows and calibrates oak to its own Table 4-3 row instead', () => {
+    // FPL-GTR-190 Table 13-5 gives red and white oak as "commercial" group rows; Table 4-3 has species rows
+    // (northern red oak T 8.6 %, quoted; white oak T 10.5 %, read). The group row's C_T 0.00369 would give 24 × 0.00369 × 8 = 0.709 in
+    // for 6 → 14 %, the species’ own row 0.591 in.
+    for (const slug of ['northern-red-oak', 'white-oak']) {
+      const row = getSpecies(slug).coefficientRow;
+      expect(row.kind).toBe('group');
+      if (row.kind === 'group') expect(row.name).toMatch(/group row/);
+    }
+    expect(move('northern-red-oak', 'flatsawn', 24, 6, 14)).toBeLessThan(24 * 0.00369 * 8 - 0.1);
   });
 });
 
 describe('dimensionalChangeIn input checks', () => {
+  const ok = { dimensionIn: 10, speciesSlug: 'black-walnut', grain: 'flatsawn' as const, fromMcPercent: 12, toMcPercent: 8 };
+
   it('refuses an unknown species, a negative MC and an unknown grain', () => {
-    const ok = { dimensionIn: 10, speciesSlug: 'black-walnut', grain: 'flatsawn' as const, fromMcPercent: 12, toMcPercent: 8 };
     expect(() => dimensionalChangeIn({ ...ok, speciesSlug: 'unobtainium' })).toThrow(/speciesSlug|Unknown species/);
     expect(() => dimensionalChangeIn({ ...ok, toMcPercent: -1 })).toThrow(WoodMathError);
     expect(() => dimensionalChangeIn({ ...ok, grain: 'riftsawn' as never })).toThrow(/grain/);
     expect(() => dimensionalChangeIn({ ...ok, dimensionIn: 0 })).toThrow(/dimensionIn/);
+  });
+
+  it('refuses more water than the species can hold and absurd widths', () => {
+    // maximum MC = 100(1.54 − G_b)/(1.54 G_b), Wood Handbook FPL-GTR-190 ch. 4; walnut G_b 0.51 → about 131 %
+    expect(speciesMaxMoistureContentPercent(getSpecies('black-walnut'))).toBeCloseTo(131.1, 1);
+    expect(() => dimensionalChangeIn({ ...ok, fromMcPercent: 500 })).toThrow(/fromMcPercent.*can hold/);
+    expect(() => dimensionalChangeIn({ ...ok, toMcPercent: 132 })).toThrow(WoodMathError);
+    expect(() => dimensionalChangeIn({ ...ok, dimensionIn: 1e6 })).toThrow(/dimensionIn/);
   });
 });

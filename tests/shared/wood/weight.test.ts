@@ -1,12 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
-  getSpecies, SPECIES, slabWeightLb, specificGravityAtMc, WoodMathError, woodDensityLbPerCuFt,
+  getSpecies, SPECIES, slabWeightLb, specificGravityAtMc, speciesMaxMoistureContentPercent, weighingMoistureContent, WoodMathError,
+  woodDensityLbPerCuFt,
 } from '../../../shared/wood';
 
 describe('woodDensityLbPerCuFt (WH2021 Eqs. 4-11 to 4-14)', () => {
   it('puts black walnut at 12 % MC near 38.5 lb/ft³, about 3.2 lb per board foot', () => {
-    // WH2021 Eq. 4-14 worked example with G12 0.55 (quoted) → 38.5 lb/ft³; tolerance ±0.3 lb/ft³ and ±0.05 lb/bd ft
+    // WH2021 Eq. 4-14 with G12 0.55 from FPL-GTR-190 Table 5-3a (quoted): 62.43 × 0.55 × 1.12 = 38.5 lb/ft³;
+    // tolerance ±0.3 lb/ft³ and ±0.05 lb/bd ft
     // (the equation path gives G12 0.552 from G_b 0.51 and 12.8 % volumetric shrinkage, hence 38.6)
     const density = woodDensityLbPerCuFt({ speciesSlug: 'black-walnut', mcPercent: 12 });
     expect(Math.abs(density - 38.5)).toBeLessThanOrEqual(0.3);
@@ -51,10 +53,13 @@ describe('slabWeightLb', () => {
 
   it('gets heavier as moisture content rises, for every species', () => {
     const slugs = SPECIES.map((s) => s.slug);
-    fc.assert(fc.property(fc.constantFrom(...slugs), fc.double({ min: 0, max: 150, noNaN: true }), fc.double({ min: 0.1, max: 50, noNaN: true }),
-      (slug, mc, step) => {
+    fc.assert(fc.property(fc.constantFrom(...slugs), fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 0.001, max: 1, noNaN: true }),
+      (slug, a, b) => {
         const slab = { speciesSlug: slug, thicknessIn: 2, widthIn: 20, lengthIn: 96 };
-        expect(slabWeightLb({ ...slab, mcPercent: mc + step })).toBeGreaterThan(slabWeightLb({ ...slab, mcPercent: mc }));
+        const max = speciesMaxMoistureContentPercent(getSpecies(slug));
+        const mc = a * max * 0.99;
+        const wetter = Math.min(max, mc + b * 50 + 0.1);
+        expect(slabWeightLb({ ...slab, mcPercent: wetter })).toBeGreaterThan(slabWeightLb({ ...slab, mcPercent: mc }));
       }));
   });
 
@@ -64,6 +69,36 @@ describe('slabWeightLb', () => {
     const below = slabWeightLb({ ...slab, mcPercent: 29.999 });
     const above = slabWeightLb({ ...slab, mcPercent: 30.001 });
     expect(Math.abs(above - below)).toBeLessThanOrEqual(1e-4 * below);
+  });
+
+  it('refuses more water than the species can hold: walnut at 500 % MC is not 509 lb, it is an error', () => {
+    // maximum MC = 100(1.54 − G_b)/(1.54 G_b), USDA FPL Wood Handbook FPL-GTR-190 ch. 4; walnut G_b 0.51 → 131.1 %
+    const slab = { speciesSlug: 'black-walnut', thicknessIn: 2, widthIn: 24, lengthIn: 96 };
+    expect(() => slabWeightLb({ ...slab, mcPercent: 500 })).toThrow(/mcPercent.*can hold/);
+    expect(() => slabWeightLb({ ...slab, mcPercent: 131.2 })).toThrow(WoodMathError);
+    expect(slabWeightLb({ ...slab, mcPercent: 131 })).toBeGreaterThan(0);
+    for (const s of SPECIES) {
+      const max = speciesMaxMoistureContentPercent(s);
+      expect(() => specificGravityAtMc({ speciesSlug: s.slug, mcPercent: max + 0.01 })).toThrow(WoodMathError);
+    }
+    expect(() => slabWeightLb({ ...slab, thicknessIn: 1e6, mcPercent: 12 })).toThrow(/thicknessIn/);
+  });
+
+  it('weighs a slab with no reading at its species’ typical green moisture content and says so', () => {
+    // green MC: USDA FPL Wood Handbook FPL-GTR-190 Table 4-1 (heartwood/sapwood; the larger figure), from memory
+    const w = weighingMoistureContent('black-walnut', null);
+    expect(w).toMatchObject({ mcPercent: 90, basis: 'typical-green' });
+    expect(w.note).toMatch(/No moisture reading yet/);
+    expect(w.note).toMatch(/from memory/);
+    expect(weighingMoistureContent('black-walnut', 14)).toMatchObject({ mcPercent: 14, basis: 'reading' });
+    for (const s of SPECIES) {
+      // every typical green MC is wetter than fiber saturation and below the most the species can hold
+      expect(s.greenMcPercent).toBeGreaterThan(30);
+      expect(s.greenMcPercent).toBeLessThan(speciesMaxMoistureContentPercent(s));
+    }
+    // A green walnut slab weighs far more than one at the 20 % air-dry line (WH2021 Eq. 4-14).
+    const slab = { speciesSlug: 'black-walnut', thicknessIn: 2, widthIn: 20, lengthIn: 96 };
+    expect(slabWeightLb({ ...slab, mcPercent: w.mcPercent })).toBeGreaterThan(1.4 * slabWeightLb({ ...slab, mcPercent: 20 }));
   });
 
   it('refuses an unknown species, a negative MC and a zero size', () => {

@@ -8,11 +8,16 @@ import { PageTitle } from '../../../components/ui/page-title';
 import { Notice } from '../../../components/ui/notice';
 import { friendlyMessage } from '../../../lib/api-client';
 import { paths } from '../../../paths';
+import { z } from 'zod';
+import { parseSlabListQuery } from '../../../../shared/slabs';
 
 export function CataloguePage() {
   const [params, setParams] = useSearchParams();
   const filters = Object.fromEntries(params.entries());
-  const { data, error, isFetching } = useQuery(slabListQuery(filters));
+  // The same schema the server uses: a filter it would refuse is marked at its box, not fetched.
+  const checked = parseSlabListQuery(filters);
+  const fieldErrors = checked.success ? {} : z.flattenError(checked.error).fieldErrors as Record<string, string[] | undefined>;
+  const { data, error, isFetching } = useQuery({ ...slabListQuery(filters), enabled: checked.success });
   const activeCount = Object.keys(filters).filter((k) => !['page', 'sort'].includes(k)).length;
 
   return (
@@ -20,11 +25,11 @@ export function CataloguePage() {
       <aside className="lg:sticky lg:top-4 lg:self-start">
         <details className="rounded-lg border border-line bg-surface-raised p-3 lg:hidden">
           <summary className="min-h-11 cursor-pointer py-2 font-semibold">Filters and sort{activeCount ? ` (${activeCount} on)` : ''}</summary>
-          <div className="pt-3"><CatalogueFilters values={filters} onChange={(next) => setParams(next)} /></div>
+          <div className="pt-3"><CatalogueFilters values={filters} fieldErrors={fieldErrors} onChange={(next) => setParams(next)} /></div>
         </details>
         <div className="hidden rounded-lg border border-line bg-surface-raised p-4 lg:block">
           <h2 className="mb-3 text-lg font-bold">Find a slab</h2>
-          <CatalogueFilters values={filters} onChange={(next) => setParams(next)} />
+          <CatalogueFilters values={filters} fieldErrors={fieldErrors} onChange={(next) => setParams(next)} />
         </div>
       </aside>
       <section aria-labelledby="catalogue-title" className="flex flex-col gap-4">
@@ -36,7 +41,12 @@ export function CataloguePage() {
             {data ? `${data.total} ${data.total === 1 ? 'slab' : 'slabs'}` : ''}{isFetching ? ' · updating…' : ''}
           </p>
         </div>
-        {error && <Notice tone="danger" role="alert" title="These filters did not work">{friendlyMessage(error)}</Notice>}
+        {!checked.success && (
+          <Notice tone="danger" role="alert" title="Check the filters">
+            {Object.values(fieldErrors).flat().filter(Boolean).join(' ') || 'One of the filters could not be used.'}
+          </Notice>
+        )}
+        {checked.success && error && <Notice tone="danger" role="alert" title="These filters did not work">{friendlyMessage(error)}</Notice>}
         {data && data.items.length === 0 && (
           <Notice title="Nothing matches">Try a wider thickness range or clear some filters.</Notice>
         )}

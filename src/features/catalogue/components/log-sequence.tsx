@@ -1,7 +1,8 @@
 import { Link } from 'react-router';
 import type { LogNeighbour } from '../../../../shared/slabs';
-import { areBookMatched, STATUS_LABELS } from '../../../../shared/slabs';
-import { formatCents, toSixteenths } from '../../../../shared/wood/index';
+import { areBookMatched, isSold, priceWords, STATUS_LABELS } from '../../../../shared/slabs';
+import { formatCents } from '../../../../shared/wood/index';
+import { Length } from '../../../lib/units';
 import { paths } from '../../../paths';
 
 /**
@@ -22,8 +23,8 @@ export function LogSequence({ logId, neighbours }: { logId: number; neighbours: 
               <Link to={paths.slab(n.id)} className="font-semibold text-accent underline">No. {n.sequenceInLog} · {n.code}</Link>
             )}
             {n.coverThumbUrl && <img src={n.coverThumbUrl} alt="" className="my-1 h-12 w-full rounded object-cover" />}
-            <p>{toSixteenths(n.thicknessIn)}″ × {toSixteenths(n.widthIn)}″</p>
-            <p>{STATUS_LABELS[n.status]}{n.status === 'listed' ? ` · ${formatCents(n.priceCents)}` : ''}</p>
+            <p><Length inches={n.thicknessIn} /> × <Length inches={n.widthIn} /></p>
+            <p>{isSold(n.status) ? priceWords(n.status, n.priceCents, formatCents) : STATUS_LABELS[n.status]}{n.status === 'listed' && n.priceCents !== null ? ` · ${formatCents(n.priceCents)}` : ''}</p>
             {partner && !n.isThisSlab && <p className="font-semibold text-moss">Book-matched partner</p>}
           </li>
         );

@@ -1,14 +1,15 @@
 import type { SlabDetail } from '../../../../shared/slabs';
 import { LIVE_EDGE_LABELS } from '../../../../shared/slabs';
-import { formatInches } from '../../../../shared/wood/index';
+import { useMeasures } from '../../../lib/units';
 
 export function MeasurementsTable({ slab }: { slab: SlabDetail }) {
+  const m = useMeasures();
   const rows: [string, string][] = [
-    ['Thickness', formatInches(slab.thicknessIn)],
-    ['Width, measured along the slab', slab.widthsIn.map((w) => formatInches(w)).join(' · ')],
-    ['Average width', formatInches(slab.widthIn)],
-    ['Length', `${formatInches(slab.lengthIn)} — ${(slab.lengthIn / 12).toFixed(1)} ft`],
-    ['Board feet', `${slab.boardFeet.toFixed(2)} bd ft (thickness × average width × length ÷ 144)`],
+    ['Thickness', m.length(slab.thicknessIn)],
+    ['Width, measured along the slab', slab.widthsIn.map((w) => m.length(w)).join(' · ')],
+    ['Average width', m.length(slab.widthIn)],
+    ['Length', m.longLength(slab.lengthIn)],
+    ['Board feet', `${m.boardFeet(slab.boardFeet)} (thickness × average width × length ÷ 144, in inches)`],
     ['Edges', LIVE_EDGE_LABELS[slab.liveEdge]],
     ['Figure', slab.figures.length ? `${slab.figures.join(', ')}${slab.figureNotes ? ` — ${slab.figureNotes}` : ''}` : slab.figureNotes || 'Plain'],
     ['Defects', slab.defects.length ? slab.defects.map((d) => `${d.kind}${d.note ? ` (${d.note})` : ''}`).join('; ') : 'None noted'],

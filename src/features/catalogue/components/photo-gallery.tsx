@@ -1,5 +1,8 @@
 import { useState } from 'react';
 import type { SlabPhotoView } from '../../../../shared/slabs';
+import { PHOTO_VIEW_LABELS, type PhotoView } from '../../../../shared/photos';
+
+const viewLabel = (v: string | null) => (v ? PHOTO_VIEW_LABELS[v as PhotoView] ?? null : null);
 
 export function PhotoGallery({ photos, code }: { photos: SlabPhotoView[]; code: string }) {
   const [index, setIndex] = useState(0);
@@ -16,8 +19,11 @@ export function PhotoGallery({ photos, code }: { photos: SlabPhotoView[]; code: 
         alt={current.altText || `Slab ${code}, photo ${index + 1} of ${photos.length}`}
         className="h-auto w-full rounded-lg border border-line bg-surface-sunk object-contain"
       />
-      {current.isIllustration && (
-        <figcaption className="text-sm text-ink-soft">Drawn illustration from the slab's measurements — not a photograph.</figcaption>
+      {(viewLabel(current.view) || current.isIllustration) && (
+        <figcaption className="text-sm text-ink-soft">
+          {viewLabel(current.view) && <span className="font-semibold text-ink">{viewLabel(current.view)}. </span>}
+          {current.isIllustration && "Drawn illustration from the slab's measurements — not a photograph."}
+        </figcaption>
       )}
       {photos.length > 1 && (
         <ul className="flex gap-2 overflow-x-auto" aria-label="More photos">
@@ -26,7 +32,7 @@ export function PhotoGallery({ photos, code }: { photos: SlabPhotoView[]; code: 
               <button
                 type="button"
                 onClick={() => setIndex(i)}
-                aria-label={`Show photo ${i + 1}`}
+                aria-label={`Show photo ${i + 1}${viewLabel(p.view) ? `: ${viewLabel(p.view)}` : ''}`}
                 aria-pressed={i === index}
                 className={`block h-16 w-24 overflow-hidden rounded border-2 ${i === index ? 'border-accent' : 'border-transparent'}`}
               >

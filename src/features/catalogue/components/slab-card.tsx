@@ -1,14 +1,17 @@
 import { Link } from 'react-router';
 import { paths } from '../../../paths';
-import { STATUS_LABELS, LIVE_EDGE_LABELS, type SlabListItem } from '../../../../shared/slabs';
-import { formatCents, toSixteenths } from '../../../../shared/wood/index';
+import { STATUS_LABELS, LIVE_EDGE_LABELS, priceWords, type SlabListItem } from '../../../../shared/slabs';
+import { formatCents, formatPercent, MM_PER_INCH } from '../../../../shared/wood/index';
+import { useMeasures } from '../../../lib/units';
 import { Tag } from '../../../components/ui/tag';
-
-const dims = (s: Pick<SlabListItem, 'thicknessIn' | 'widthIn' | 'lengthIn'>) =>
-  `${toSixteenths(s.thicknessIn)}″ × ${toSixteenths(s.widthIn)}″ × ${toSixteenths(s.lengthIn)}″`;
 
 export function SlabCard({ slab }: { slab: SlabListItem }) {
   const forSale = slab.status === 'listed';
+  const m = useMeasures();
+  // Read aloud as plain numbers with the unit named in full.
+  const spoken = m.units === 'metric'
+    ? `thickness ${Math.round(slab.thicknessIn * MM_PER_INCH)} millimetres, average width ${Math.round(slab.widthIn * MM_PER_INCH)} millimetres, length ${Math.round(slab.lengthIn * MM_PER_INCH)} millimetres`
+    : `thickness ${slab.thicknessIn} inches, average width ${slab.widthIn} inches, length ${slab.lengthIn} inches`;
   return (
     <li className="flex flex-col overflow-hidden rounded-lg border border-line bg-surface-raised shadow-sm">
       <Link to={paths.slab(slab.id)} className="group flex h-full flex-col focus-visible:outline-offset-[-3px]">
@@ -24,16 +27,16 @@ export function SlabCard({ slab }: { slab: SlabListItem }) {
             <h2 className="font-display text-lg font-bold group-hover:underline">{slab.species.name}</h2>
             <span className="text-sm text-ink-soft">{slab.code}</span>
           </div>
-          <p className="text-ink-soft" aria-label={`thickness ${slab.thicknessIn} inches, average width ${slab.widthIn} inches, length ${slab.lengthIn} inches`}>{dims(slab)}</p>
+          <p className="text-ink-soft" aria-label={spoken}>{m.dimensions(slab)}</p>
           <p className="text-sm text-ink-soft">{LIVE_EDGE_LABELS[slab.liveEdge]}{slab.figures.length ? ` · ${slab.figures.join(', ')}` : ''}</p>
           <div className="mt-auto flex items-end justify-between gap-2 pt-2">
             <div>
-              <p className="text-xl font-bold text-accent-strong">{formatCents(slab.priceCents)}</p>
-              <p className="text-sm text-ink-soft">{slab.boardFeet.toFixed(2)} bd ft</p>
+              <p className="text-xl font-bold text-accent-strong">{priceWords(slab.status, slab.priceCents, formatCents)}</p>
+              <p className="text-sm text-ink-soft">{m.boardFeet(slab.boardFeet)}</p>
             </div>
             <div className="flex flex-col items-end gap-1">
               <Tag tone={forSale ? 'moss' : slab.status === 'held' ? 'caution' : 'neutral'}>{STATUS_LABELS[slab.status]}</Tag>
-              {slab.moisturePercent !== null && <span className="text-sm text-ink-soft">{slab.moisturePercent.toFixed(1)} % MC</span>}
+              {slab.moisturePercent !== null && <span className="text-sm text-ink-soft">{formatPercent(slab.moisturePercent)} MC</span>}
             </div>
           </div>
         </div>

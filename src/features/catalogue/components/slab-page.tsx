@@ -7,10 +7,11 @@ import { PriceBreakdown } from './price-breakdown';
 import { LogSequence } from './log-sequence';
 import { WeightCaution } from './weight-caution';
 import { MeasurementsTable } from './measurements-table';
+import { DryingForecastNote } from '../../../components/wood/drying-forecast';
 import { PageTitle } from '../../../components/ui/page-title';
 import { Tag } from '../../../components/ui/tag';
 import { paths } from '../../../paths';
-import { STATUS_LABELS, SAWING_METHOD_LABELS } from '../../../../shared/slabs';
+import { isSold, priceWords, STATUS_LABELS, SAWING_METHOD_LABELS } from '../../../../shared/slabs';
 import { DRYING_STATES, formatCents } from '../../../../shared/wood/index';
 
 const MoistureChart = lazy(() => import('./moisture-chart'));
@@ -41,9 +42,11 @@ export function SlabPage({ slots = {} }: { slots?: SlabPageSlots }) {
               {drying && <Tag tone="accent">{drying.label}</Tag>}
             </div>
           </div>
-          <p className="text-3xl font-bold text-accent-strong">{formatCents(slab.priceBreakdown.totalCents)}</p>
+          <p className="text-3xl font-bold text-accent-strong">{priceWords(slab.status, slab.priceBreakdown?.totalCents ?? slab.priceCents, formatCents)}</p>
           {slots.actions?.(slab.id)}
-          <PriceBreakdown breakdown={slab.priceBreakdown} />
+          {slab.priceBreakdown && (
+            <PriceBreakdown breakdown={slab.priceBreakdown} caption={isSold(slab.status) ? 'How the price was worked out when it sold' : undefined} />
+          )}
           <WeightCaution slab={slab} />
         </div>
       </div>
@@ -63,11 +66,10 @@ export function SlabPage({ slots = {} }: { slots?: SlabPageSlots }) {
           <p className="mt-2 text-sm">
             {slab.moisturePercent !== null && <>Latest reading {slab.moisturePercent} % MC ({slab.moistureReadings.at(-1)?.meterKind} meter, {slab.moistureReadings.at(-1)?.measuredOn}). </>}
             {drying && <>{drying.description} </>}
-            {slab.airDryReadyOn && (slab.airDryReadyOn > new Date().toISOString().slice(0, 10)
-              ? <>Estimated air-dry by {slab.airDryReadyOn} (rule of thumb: about a year per inch of thickness). </>
-              : <>It has had its year per inch of air drying (rule of thumb) since {slab.airDryReadyOn}. </>)}
-            The mill's target for furniture stock is {slab.targetMcPercent} % MC.
+            The mill's target for furniture stock is {slab.targetMcPercent} % MC; outdoors a slab only dries to about the yard's
+            average equilibrium moisture, so the last step happens indoors.
           </p>
+          <div className="mt-2"><DryingForecastNote forecast={slab.dryingForecast} /></div>
         </div>
       </section>
 

@@ -12,6 +12,7 @@ import { paths } from '../../../paths';
 import type { HoldView } from '../../../../shared/holds';
 import { loadingAdvice } from '../../../../shared/loading';
 import { formatCents } from '../../../../shared/wood/index';
+import { Length } from '../../../lib/units';
 import { newIdempotencyKey, pickupSlotsQuery, useCheckout } from '../api';
 import { LoadingAdvicePanel } from './loading-advice-panel';
 import { SlotPicker } from './slot-picker';
@@ -76,7 +77,7 @@ export function CheckoutPage({ holds }: { holds: HoldView[] }) {
               {h.slab.flattening.feasible ? (
                 <label className="mt-1 flex min-h-11 items-center gap-2">
                   <input type="checkbox" value={String(h.slabId)} {...register('flatten')} />
-                  <span>Flatten both faces at the mill (+{formatCents(h.slab.flattening.priceCents)}, leaves about {h.slab.flattening.finishedThicknessIn.toFixed(2)} in)</span>
+                  <span>Flatten both faces at the mill (+{formatCents(h.slab.flattening.priceCents)}, leaves about <Length inches={h.slab.flattening.finishedThicknessIn} />)</span>
                 </label>
               ) : <p className="text-sm text-ink-soft">Flattening not offered: {h.slab.flattening.reason}</p>}
             </li>

@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { PageTitle } from '../../../components/ui/page-title';
-import { formatCents } from '../../../../shared/wood/index';
+import { formatCents, plainNumber } from '../../../../shared/wood/index';
 import type { MillNumbers, SalesMoney } from '../../../../shared/office';
 import { numbersQuery } from '../api';
 
@@ -78,7 +78,7 @@ function NumbersTables({ data }: { data: MillNumbers }) {
           <tbody>
             {data.sales.map((s) => (
               <tr key={`${s.month}-${s.speciesName}`} className="border-b border-line/60">
-                <td>{s.month}</td><td>{s.speciesName}</td><td>{s.slabs}</td><td>{s.boardFeet.toFixed(2)}</td>
+                <td>{s.month}</td><td>{s.speciesName}</td><td>{s.slabs}</td><td>{plainNumber(s.boardFeet, 2)}</td>
                 <MoneyCells m={s} />
               </tr>
             ))}

@@ -4,7 +4,8 @@ import { PageTitle } from '../../../components/ui/page-title';
 import { Tag } from '../../../components/ui/tag';
 import { Notice } from '../../../components/ui/notice';
 import { paths } from '../../../paths';
-import { formatCents, formatInches } from '../../../../shared/wood/index';
+import { formatCents } from '../../../../shared/wood/index';
+import { BoardFeet, Length, Weight } from '../../../lib/units';
 import { formatWindow } from '../../../../shared/pickups';
 import { orderQuery } from '../api';
 import { ORDER_STATUS_LABELS } from './order-status';
@@ -31,7 +32,7 @@ export function OrderPage() {
         <dt className="font-semibold">Buyer</dt><dd>{order.buyerName} · <a className="underline" href={`mailto:${order.buyerEmail}`}>{order.buyerEmail}</a></dd>
         <dt className="font-semibold">Pickup</dt><dd>{order.pickupOn ?? 'not booked'}{order.pickupWindow ? `, ${formatWindow(order.pickupWindow)}` : ''}</dd>
         <dt className="font-semibold">Collected</dt><dd>{order.pickedUpAt ? when(order.pickedUpAt) : 'not yet'}</dd>
-        <dt className="font-semibold">Load</dt><dd>about {Math.round(order.totalWeightLb)} lb, longest slab {formatInches(order.longestSlabIn)}</dd>
+        <dt className="font-semibold">Load</dt><dd>about <Weight pounds={order.totalWeightLb} />, longest slab <Length inches={order.longestSlabIn} /></dd>
         <dt className="font-semibold">Total</dt><dd>{formatCents(order.totalCents)} (slabs {formatCents(order.slabsCents)}, services {formatCents(order.servicesCents)})</dd>
         <dt className="font-semibold">Refunded</dt><dd>{formatCents(order.refundedCents)}</dd>
       </dl>
@@ -42,7 +43,7 @@ export function OrderPage() {
           {order.lines.map((l) => (
             <li key={l.id} className="flex flex-wrap gap-2">
               <Link to={paths.slab(l.slabId)} className="font-semibold text-accent underline">{l.slabCode}</Link>
-              <span>{l.speciesName}, {l.boardFeet.toFixed(2)} bd ft, {formatCents(l.totalCents)}</span>
+              <span>{l.speciesName}, <BoardFeet value={l.boardFeet} />, {formatCents(l.totalCents)}</span>
               {l.status === 'refunded' ? <Tag tone="caution">Refunded</Tag> : null}
               <span className="text-ink-soft">({SLAB_STATE[l.slabStatus] ?? l.slabStatus})</span>
             </li>

@@ -5,7 +5,8 @@ import { Notice } from '../../../components/ui/notice';
 import { Tag } from '../../../components/ui/tag';
 import { buttonClass } from '../../../components/ui/button';
 import { paths } from '../../../paths';
-import { formatInches, EQUIPMENT_ABOVE_LB } from '../../../../shared/wood/index';
+import { lifting, WOOD_LIMITS } from '../../../../shared/wood/index';
+import { Length, Weight } from '../../../lib/units';
 import { formatWindow, WEEKDAY_NAMES } from '../../../../shared/pickups';
 import type { PickupOrder, PickupBoard } from '../../../../shared/office';
 import { pickupsQuery } from '../api';
@@ -28,7 +29,9 @@ export function PickupBoardPage() {
         <button type="button" className={buttonClass('secondary')} onClick={() => setParams({ from: shift(board.from, 7) })}>Week after</button>
       </div>
       <Notice tone="caution" title="Loading safely">
-        Slabs are heavy and awkward. Lift with enough people, keep loads close to the body, and use a cart or forklift for anything over {EQUIPMENT_ABOVE_LB} lb. Follow your local workplace rules.
+        Slabs are heavy and awkward. {lifting({ weightLb: 1 }).basis} Anything heavier than two people should carry goes on a slab cart,
+        or is lifted with the forklift or hoist by a trained operator only (certified where local rules require it); keep buyers clear of a raised load.
+        Follow your local workplace rules and licensed practice.
       </Notice>
       {board.dates.map((d) => <DaySection key={d.date} day={d} board={board} />)}
     </div>
@@ -63,7 +66,7 @@ function DaySection({ day, board }: { day: PickupBoard['dates'][number]; board: 
 }
 
 function OrderCard({ order, board }: { order: PickupOrder; board: PickupBoard }) {
-  const heavy = order.totalWeightLb > EQUIPMENT_ABOVE_LB;
+  const heavy = order.totalWeightLb > 0 && lifting({ weightLb: Math.min(order.totalWeightLb, 20_000) }).needsEquipment;
   return (
     <li className="flex flex-col gap-2 rounded-md border border-line bg-surface p-3">
       <div className="flex flex-wrap items-center gap-2">
@@ -73,7 +76,7 @@ function OrderCard({ order, board }: { order: PickupOrder; board: PickupBoard })
         {heavy && <Tag tone="danger">Needs a cart or forklift</Tag>}
       </div>
       <p>{order.buyerName} · <a className="underline" href={`mailto:${order.buyerEmail}`}>{order.buyerEmail}</a></p>
-      <p className="text-sm">Slabs: {order.slabCodes.join(', ') || '—'} · about {Math.round(order.totalWeightLb)} lb · longest {formatInches(order.longestSlabIn)}</p>
+      <p className="text-sm">Slabs: {order.slabCodes.join(', ') || '—'} · about <Weight pounds={order.totalWeightLb} /> · longest <Length inches={order.longestSlabIn} /></p>
       {order.pickedUpAt && <p className="text-sm text-ink-soft">Handed over {new Date(order.pickedUpAt).toLocaleString()}</p>}
       <PickupActions order={order} windows={board.windows} noShowRule={board.noShowRule} />
     </li>

@@ -6,7 +6,8 @@ import { PageTitle } from '../../../components/ui/page-title';
 import { Tag } from '../../../components/ui/tag';
 import { paths } from '../../../paths';
 import { ORDER_STATUS_LABELS, type OrderView } from '../../../../shared/checkout';
-import { formatCents, toSixteenths } from '../../../../shared/wood/index';
+import { formatCents } from '../../../../shared/wood/index';
+import { BoardFeet, Length, Weight } from '../../../lib/units';
 import { orderQuery } from '../api';
 import { PaymentState } from './payment-state';
 
@@ -42,7 +43,7 @@ export function OrderPage({ bring }: { bring?: (order: OrderView) => ReactNode }
               <Link to={paths.slab(l.slabId)} className="font-semibold text-accent underline">{l.speciesName} slab {l.slabCode}</Link>
               <strong>{formatCents(l.totalCents)}</strong>
             </p>
-            <p className="text-sm text-ink-soft">{l.boardFeet} bd ft · {toSixteenths(l.lengthIn)} in long · about {l.weightLb} lb{l.withFlattening && ' · flattened at the mill'}</p>
+            <p className="text-sm text-ink-soft"><BoardFeet value={l.boardFeet} /> · <Length inches={l.lengthIn} /> long · about <Weight pounds={l.weightLb} />{l.withFlattening && ' · flattened at the mill'}</p>
             <table className="mt-2 w-full text-sm">
               <caption className="sr-only">Price breakdown for {l.slabCode}</caption>
               <tbody>

@@ -5,7 +5,8 @@ import { Notice } from '../../../components/ui/notice';
 import { PageTitle } from '../../../components/ui/page-title';
 import { friendlyMessage } from '../../../lib/api-client';
 import { paths } from '../../../paths';
-import { formatCents, toSixteenths } from '../../../../shared/wood/index';
+import { formatCents } from '../../../../shared/wood/index';
+import { BoardFeet, Dimensions, Weight } from '../../../lib/units';
 import { myHoldsQuery, useReleaseHold } from '../api';
 import { TimeLeft } from './time-left';
 
@@ -29,7 +30,7 @@ export function ReservationsPage() {
                 <div className="min-w-40 flex-1">
                   <Link to={paths.slab(h.slabId)} className="font-semibold text-accent underline">{h.slab.speciesName} slab {h.slab.code}</Link>
                   <p className="text-sm text-ink-soft">
-                    {toSixteenths(h.slab.thicknessIn)} × {h.slab.widthIn} × {h.slab.lengthIn} in · {h.slab.boardFeet} bd ft · about {h.slab.weightLb} lb
+                    <Dimensions of={h.slab} /> · <BoardFeet value={h.slab.boardFeet} /> · about <Weight pounds={h.slab.weightLb} />
                     {h.groupId && ' · matched pair'}
                   </p>
                   <p className="text-sm"><TimeLeft until={h.expiresAt} /></p>

@@ -8,6 +8,8 @@ import { Tag } from '../../../components/ui/tag';
 import { friendlyMessage } from '../../../lib/api-client';
 import { meQuery, useSignOut, type Role } from '../api';
 import { ChangePasswordForm } from './change-password-form';
+import { ChangeEmailForm, ChangeNameForm } from './own-details-forms';
+import { useSearchParams } from 'react-router';
 
 const ROLE_WORDS: Record<Role, { label: string; text: string }> = {
   buyer: { label: 'Customer', text: 'You can hold slabs, pay and book a pickup.' },
@@ -19,12 +21,18 @@ export function AccountPage() {
   const { data: me } = useQuery(meQuery());
   const signOut = useSignOut();
   const navigate = useNavigate();
+  const [search] = useSearchParams();
   if (!me) return null;
+  // The confirmation link for a new e-mail comes back here, with an error when it was stale or not theirs.
+  const emailChanged = search.get('email') === 'changed' && !search.get('error');
+  const emailLinkFailed = search.get('email') === 'changed' && !!search.get('error');
   const role = ROLE_WORDS[me.role];
 
   return (
     <div className="mx-auto flex w-full max-w-2xl flex-col gap-6">
       <PageTitle>Your account</PageTitle>
+      {emailChanged && <Notice tone="success" role="status">Your new e-mail is confirmed: {me.email}.</Notice>}
+      {emailLinkFailed && <Notice tone="danger" role="alert">That confirmation link has expired or belongs to another account. Ask for a new one below.</Notice>}
       <section aria-labelledby="about-heading" className="flex flex-col gap-3 rounded-lg border border-line bg-surface-raised p-4 sm:p-6">
         <h2 id="about-heading" className="font-display text-lg font-bold">About you</h2>
         <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-2">
@@ -40,6 +48,12 @@ export function AccountPage() {
             {signOut.isPending ? 'Signing out…' : 'Sign out'}
           </Button>
         </div>
+      </section>
+      <section className="rounded-lg border border-line bg-surface-raised p-4 sm:p-6">
+        <ChangeNameForm name={me.name} />
+      </section>
+      <section className="rounded-lg border border-line bg-surface-raised p-4 sm:p-6">
+        <ChangeEmailForm email={me.email} />
       </section>
       <section className="rounded-lg border border-line bg-surface-raised p-4 sm:p-6">
         <ChangePasswordForm />

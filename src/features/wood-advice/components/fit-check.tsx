@@ -1,16 +1,18 @@
 import { useState } from 'react';
-import { dimensionalChangeDetail, equilibriumMoistureContent, toSixteenths, WoodMathError, type Grain } from '../../../../shared/wood/index';
+import { dimensionalChangeDetail, equilibriumMoistureContent, formatLength, formatPercent, type Grain, type UnitSystem } from '../../../../shared/wood/index';
+import { useMeasures } from '../../../lib/units';
+import { plainWoodError } from '../../../lib/wood-words';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
 import { SHOP_CLIMATES } from './shop-climates';
 
 type Props = { speciesSlug: string; speciesName: string; widthIn: number; currentMcPercent: number; hasReading: boolean };
 
-/** Plain words for a signed width change: "about 3/16 in narrower". */
-export function describeChange(changeIn: number): string {
-  const size = toSixteenths(Math.abs(changeIn));
-  if (size === '0') return 'hardly any change (under 1/32 in)';
-  return `about ${size} in ${changeIn < 0 ? 'narrower' : 'wider'}`;
+/** Plain words for a signed width change: "about 3/16 in narrower" (or "about 5 mm narrower"). */
+export function describeChange(changeIn: number, units: UnitSystem = 'imperial'): string {
+  const size = formatLength(Math.abs(changeIn), units);
+  if (size === '0 in' || size === '0 mm') return units === 'metric' ? 'hardly any change (under 1 mm)' : 'hardly any change (under 1/32 in)';
+  return `about ${size} ${changeIn < 0 ? 'narrower' : 'wider'}`;
 }
 
 /**
@@ -30,6 +32,7 @@ export function FitCheck({ speciesSlug, speciesName, widthIn, currentMcPercent, 
     if (c) { setTemperatureF(String(c.temperatureF)); setRh(String(c.relativeHumidityPercent)); }
   };
 
+  const m = useMeasures();
   let result: { emc: number; changes: { grain: Grain; changeIn: number; note: string }[] } | null = null;
   let problem: string | null = null;
   try {
@@ -40,7 +43,10 @@ export function FitCheck({ speciesSlug, speciesName, widthIn, currentMcPercent, 
     });
     result = { emc, changes };
   } catch (e) {
-    problem = e instanceof WoodMathError ? e.message : 'Those numbers could not be used.';
+    problem = plainWoodError(e, {
+      temperatureF: { label: 'Temperature', unit: '°F' },
+      relativeHumidityPercent: { label: 'Relative humidity', unit: '%' },
+    });
   }
   if (temperatureF === '' || rh === '') problem = 'Enter a temperature and a humidity.';
 
@@ -61,13 +67,13 @@ export function FitCheck({ speciesSlug, speciesName, widthIn, currentMcPercent, 
         {!problem && result && (
           <div className="flex flex-col gap-2">
             <p>
-              In those conditions wood settles at about <strong>{result.emc.toFixed(1)} % moisture content</strong> (equilibrium moisture content,
-              USDA Wood Handbook equation 4-5). This slab is at {currentMcPercent.toFixed(1)} %{hasReading ? ' (latest reading)' : ' (assumed air-dry; no reading yet)'}.
+              In those conditions wood settles at about <strong>{formatPercent(result.emc)} moisture content</strong> (equilibrium moisture content,
+              USDA Wood Handbook equation 4-5). This slab is at {formatPercent(currentMcPercent)}{hasReading ? ' (latest reading)' : ' (typical of green wood; no reading yet)'}.
             </p>
             <ul className="list-disc pl-5">
               {result.changes.map((c) => (
                 <li key={c.grain}>
-                  If its grain is mostly <strong>{c.grain}</strong>, expect the {toSixteenths(widthIn)} in width to end up <strong>{describeChange(c.changeIn)}</strong>.
+                  If its grain is mostly <strong>{c.grain}</strong>, expect the {m.length(widthIn)} width to end up <strong>{describeChange(c.changeIn, m.units)}</strong>.
                 </li>
               ))}
             </ul>

@@ -45,6 +45,7 @@ export function PhotoManager({ slabId }: { slabId: number }) {
               onMove={(d) => move(index, d)}
               onCover={() => update.mutate({ photoId: photo.id, body: { isCover: true } }, { onSuccess: () => setAnnouncement(`Photo ${index + 1} is now the cover.`) })}
               onAltText={(altText) => update.mutate({ photoId: photo.id, body: { altText } }, { onSuccess: () => setAnnouncement('Description saved.') })}
+              onView={(view) => update.mutate({ photoId: photo.id, body: { view } }, { onSuccess: () => setAnnouncement('Photo label saved.') })}
               onDelete={() => remove.mutate(photo.id, { onSuccess: () => setAnnouncement('Photo deleted.') })}
             />
           ))}

@@ -4,7 +4,9 @@ import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
 import { ApiError, friendlyMessage } from '../../../lib/api-client';
-import { batchReadingsSchema, BATCH_MAX_ROWS, METER_KIND_LABELS, METER_KINDS, type MeterKind, type ReadingSaved } from '../../../../shared/readings';
+import {
+  batchReadingsSchema, BATCH_MAX_ROWS, METER_KIND_LABELS, METER_KINDS, READING_JUMP_CODE, type BatchReadingsInput, type MeterKind, type ReadingSaved,
+} from '../../../../shared/readings';
 import { useBatchReadings } from '../api';
 import { dryingSummary, localToday } from './drying-words';
 
@@ -20,6 +22,8 @@ const ROW_FIELDS = ['slabCode', 'mcPercent', 'location'] as const;
 export function BatchReadings() {
   const save = useBatchReadings();
   const [saved, setSaved] = useState<ReadingSaved[] | null>(null);
+  /** A round with rows that jump from their slab's previous reading: held until the person confirms them. */
+  const [jumps, setJumps] = useState<{ body: BatchReadingsInput; rows: number[] } | null>(null);
   const formRef = useRef<HTMLFormElement>(null);
   const { register, control, handleSubmit, setError, clearErrors, reset, getValues, formState: { errors } } = useForm<Values>({
     defaultValues: { measuredOn: localToday(), meterKind: 'pin', rows: [blankRow()] },
@@ -41,9 +45,34 @@ export function BatchReadings() {
     }
   }
 
+  async function send(body: BatchReadingsInput, measuredOn: string, meterKind: MeterKind) {
+    try {
+      const res = await save.mutateAsync(body);
+      setJumps(null);
+      setSaved(res.items);
+      reset({ measuredOn, meterKind, rows: [blankRow()] });
+      focus('rows.0.slabCode');
+    } catch (e) {
+      if (e instanceof ApiError && e.code === READING_JUMP_CODE) {
+        showErrors(e.fieldErrors);
+        setJumps({ body, rows: Object.keys(e.fieldErrors).map((k) => Number(k.split('.')[1])) });
+      } else if (e instanceof ApiError && Object.keys(e.fieldErrors).length) showErrors(e.fieldErrors);
+      else setError('root', { message: friendlyMessage(e) });
+    }
+  }
+
+  /** Resends the same round with the flagged rows marked as confirmed by the person. */
+  const confirmJumps = () => {
+    if (!jumps) return;
+    const body = { readings: jumps.body.readings.map((r, i) => (jumps.rows.includes(i) ? { ...r, confirmed: true } : r)) };
+    clearErrors();
+    void send(body, getValues('measuredOn'), getValues('meterKind'));
+  };
+
   const onSubmit = handleSubmit(async (values) => {
     clearErrors();
     setSaved(null);
+    setJumps(null);
     const filled = values.rows.filter((r) => r.slabCode.trim() || r.mcPercent.trim());
     const body = { readings: filled.map((r) => ({ slabCode: r.slabCode, mcPercent: r.mcPercent, location: r.location, measuredOn: values.measuredOn, meterKind: values.meterKind })) };
     if (filled.length !== values.rows.length) reset({ ...values, rows: filled.length ? filled : [blankRow()] });
@@ -53,15 +82,7 @@ export function BatchReadings() {
       for (const issue of checked.error.issues) (fieldErrors[issue.path.join('.') || '_form'] ??= []).push(issue.message);
       return showErrors(fieldErrors);
     }
-    try {
-      const res = await save.mutateAsync(body);
-      setSaved(res.items);
-      reset({ measuredOn: values.measuredOn, meterKind: values.meterKind, rows: [blankRow()] });
-      focus('rows.0.slabCode');
-    } catch (e) {
-      if (e instanceof ApiError && Object.keys(e.fieldErrors).length) showErrors(e.fieldErrors);
-      else setError('root', { message: friendlyMessage(e) });
-    }
+    await send(body, values.measuredOn, values.meterKind);
   });
 
   const big = 'text-lg';
@@ -93,7 +114,15 @@ export function BatchReadings() {
         ))}
       </ol>
       {errors.root?.message && <Notice tone="danger" role="alert" title="Nothing was saved">{errors.root.message}</Notice>}
-      {errors.rows && !errors.root && <Notice tone="danger" role="alert">Some rows need fixing. Nothing was saved yet.</Notice>}
+      {jumps ? (
+        <Notice tone="caution" role="alert" title="Are these readings right?">
+          <p>{jumps.rows.length === 1 ? 'One reading jumps' : `${jumps.rows.length} readings jump`} a long way from the slab's previous reading (see the rows above). Check the meter and the slab. Nothing was saved yet.</p>
+          <div className="mt-2 flex flex-wrap gap-2">
+            <Button onClick={confirmJumps} disabled={save.isPending}>Yes, save them as read</Button>
+            <Button variant="quiet" onClick={() => setJumps(null)}>No, I will measure again</Button>
+          </div>
+        </Notice>
+      ) : errors.rows && !errors.root && <Notice tone="danger" role="alert">Some rows need fixing. Nothing was saved yet.</Notice>}
       <div className="flex flex-wrap gap-3">
         <Button variant="secondary" onClick={addRow} disabled={rows.fields.length >= BATCH_MAX_ROWS}>Add a slab</Button>
         <Button type="submit" disabled={save.isPending} className="grow sm:grow-0">{save.isPending ? 'Saving…' : `Save ${rows.fields.length} reading${rows.fields.length === 1 ? '' : 's'}`}</Button>

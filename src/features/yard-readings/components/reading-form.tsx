@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button } from '../../../components/ui/button';
@@ -5,7 +6,7 @@ import { SelectField, TextField } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
 import { ApiError, friendlyMessage } from '../../../lib/api-client';
 import {
-  createReadingSchema, METER_KIND_LABELS, METER_KINDS, type CreateReading, type CreateReadingInput,
+  createReadingSchema, METER_KIND_LABELS, METER_KINDS, READING_JUMP_CODE, type CreateReading, type CreateReadingInput,
 } from '../../../../shared/readings';
 import { useAddReading } from '../api';
 import { dryingSummary, localToday } from './drying-words';
@@ -18,18 +19,25 @@ export function ReadingForm({ slabId }: { slabId: number }) {
     defaultValues: { measuredOn: localToday(), meterKind: 'pin', location: '' },
   });
 
-  const onSubmit = handleSubmit(async (values) => {
+  /** A reading that jumps from the previous one waits here until the person confirms it or re-measures. */
+  const [jump, setJump] = useState<{ message: string; values: CreateReading } | null>(null);
+
+  async function save(values: CreateReading) {
+    setJump(null);
     try {
       await add.mutateAsync(values);
       reset({ measuredOn: values.measuredOn, meterKind: values.meterKind, location: '', mcPercent: '' });
     } catch (e) {
-      if (e instanceof ApiError) {
+      if (e instanceof ApiError && e.code === READING_JUMP_CODE) {
+        setJump({ message: e.fieldErrors.mcPercent?.[0] ?? e.message, values });
+      } else if (e instanceof ApiError) {
         for (const [field, messages] of Object.entries(e.fieldErrors)) {
           if (field in createReadingSchema.shape) setError(field as keyof CreateReadingInput, { message: messages[0] });
         }
       }
     }
-  });
+  }
+  const onSubmit = handleSubmit((values) => save({ ...values, confirmed: undefined }));
 
   const saved = add.data;
   const err = (name: keyof CreateReadingInput) => errors[name]?.message as string | undefined;
@@ -48,10 +56,19 @@ export function ReadingForm({ slabId }: { slabId: number }) {
         <TextField label="Relative humidity (%, optional)" inputMode="decimal" {...register('ambientRhPercent')} error={err('ambientRhPercent')}
           hint="With the air temperature, this gives the moisture content the wood is heading towards outdoors." />
       </div>
-      {add.isError && !(add.error instanceof ApiError && Object.keys(add.error.fieldErrors).length) && (
+      {jump && (
+        <Notice tone="caution" role="alert" title="Is this reading right?">
+          <p>{jump.message}</p>
+          <div className="mt-2 flex flex-wrap gap-2">
+            <Button onClick={() => save({ ...jump.values, confirmed: true })} disabled={add.isPending}>Yes, save {jump.values.mcPercent} % as read</Button>
+            <Button variant="quiet" onClick={() => setJump(null)}>No, I will measure again</Button>
+          </div>
+        </Notice>
+      )}
+      {add.isError && !jump && !(add.error instanceof ApiError && Object.keys(add.error.fieldErrors).length) && (
         <Notice tone="danger" role="alert">{friendlyMessage(add.error)}</Notice>
       )}
-      {saved && !add.isPending && (
+      {saved && !add.isPending && !jump && (
         <Notice tone="success" role="status" title="Reading saved">
           <p>{dryingSummary(saved.slab.dryingState, saved.reading.mcPercent, saved.targetMcPercent)}</p>
           {saved.emcPercent !== null && <p>The air would bring wood to about {saved.emcPercent} % (equilibrium moisture content).</p>}

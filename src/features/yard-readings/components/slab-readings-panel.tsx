@@ -28,7 +28,7 @@ export function SlabReadingsPanel({ slabId }: { slabId: number }) {
         <Tag tone="accent">{dryingLabel(slab.dryingState)}</Tag>
         <span className="text-sm text-ink-soft">mill target {targetMcPercent} %</span>
       </div>
-      <DryingCurve readings={items} targetMcPercent={targetMcPercent} airDryReadyOn={airDryReadyOn} />
+      <DryingCurve readings={items.filter((r) => r.review !== 'unconfirmed')} targetMcPercent={targetMcPercent} airDryReadyOn={airDryReadyOn} />
       <ReadingForm slabId={slabId} />
       {remove.isError && <Notice tone="danger" role="alert">{friendlyMessage(remove.error)}</Notice>}
       {newestFirst.length > 0 && (
@@ -42,7 +42,11 @@ export function SlabReadingsPanel({ slabId }: { slabId: number }) {
               {newestFirst.map((r) => (
                 <tr key={r.id} className="border-b border-line/60">
                   <td className="py-2 pr-3 whitespace-nowrap">{r.measuredOn}</td>
-                  <td className="pr-3 font-semibold">{r.mcPercent} %</td>
+                  <td className="pr-3">
+                    <span className="font-semibold">{r.mcPercent} %</span>
+                    {r.review === 'confirmed' && <span className="ml-1 text-ink-soft">(confirmed jump)</span>}
+                    {r.review === 'unconfirmed' && <span className="ml-1"><Tag tone="danger">Not shown to buyers</Tag></span>}
+                  </td>
                   <td className="pr-3">{METER_KIND_LABELS[r.meterKind] ?? r.meterKind}</td>
                   <td className="pr-3">{r.location || '—'}{r.depthIn !== null ? `, ${r.depthIn} in deep` : ''}</td>
                   <td className="py-1 text-right">

@@ -2,7 +2,7 @@ import { useEffect, useState } from 'react';
 import { useQueries, useQuery } from '@tanstack/react-query';
 import QRCode from 'qrcode';
 import type { YardSlabDetail } from '../../../../shared/slab-input';
-import { roundBoardFeet, toSixteenths } from '../../../../shared/wood/index';
+import { BoardFeet, Dimensions } from '../../../lib/units';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { PageTitle } from '../../../components/ui/page-title';
@@ -27,8 +27,8 @@ function SlabLabel({ slab }: { slab: YardSlabDetail }) {
       <div className="grid content-start gap-0.5">
         <p className="font-display text-2xl font-bold">{slab.code}</p>
         <p className="font-semibold">{slab.species.name}</p>
-        <p>{toSixteenths(slab.thicknessIn)}″ × {toSixteenths(slab.widthIn)}″ × {toSixteenths(slab.lengthIn)}″</p>
-        <p>{roundBoardFeet(slab.boardFeet)} board feet</p>
+        <p><Dimensions of={slab} /></p>
+        <p><BoardFeet value={slab.boardFeet} /></p>
         <p className="text-sm">Kept at: {[slab.yardStack, slab.yardPosition].filter(Boolean).join(' · ') || 'not recorded'}</p>
       </div>
     </article>

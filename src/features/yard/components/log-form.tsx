@@ -7,6 +7,8 @@ import { createLogSchema, type LogDetail } from '../../../../shared/logs';
 import { SAWING_METHODS, SAWING_METHOD_LABELS } from '../../../../shared/slabs';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
 import { Button } from '../../../components/ui/button';
+import { InchesField } from '../../../components/ui/inches-field';
+import { inchesForInput } from '../../../../shared/wood/index';
 import { Notice } from '../../../components/ui/notice';
 import { useCreateLog, useUpdateLog, yardSpeciesQuery } from '../api';
 import { applyServerErrors } from './server-errors';
@@ -27,7 +29,10 @@ export function LogForm({ log, onSaved }: { log?: LogDetail; onSaved: (log: LogD
   const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<In, unknown, Out>({
     resolver: zodResolver(createLogSchema),
     defaultValues: log
-      ? { ...log, speciesSlug: log.species.slug }
+      ? {
+        ...log, speciesSlug: log.species.slug, lengthIn: inchesForInput(log.lengthIn),
+        buttDiameterIn: inchesForInput(log.buttDiameterIn), topDiameterIn: inchesForInput(log.topDiameterIn),
+      }
       : { sawingMethod: 'live-edge-slabbing', originNote: '', notes: '', felledOn: null, milledOn: null },
   });
 
@@ -40,7 +45,6 @@ export function LogForm({ log, onSaved }: { log?: LogDetail; onSaved: (log: LogD
     }
   });
 
-  const num = { valueAsNumber: true } as const;
   return (
     <form onSubmit={onSubmit} noValidate className="grid gap-4 sm:grid-cols-2">
       {formError && <div className="sm:col-span-2"><Notice tone="danger" role="alert">{formError}</Notice></div>}
@@ -52,12 +56,12 @@ export function LogForm({ log, onSaved }: { log?: LogDetail; onSaved: (log: LogD
         autoCapitalize="characters" {...register('code', { setValueAs: blankToUndefined })} />
       <TextField label="Felled on" type="date" error={errors.felledOn?.message} {...register('felledOn', { setValueAs: blankToNull })} />
       <TextField label="Milled on" type="date" hint="Leave empty until the log is sawn." error={errors.milledOn?.message} {...register('milledOn', { setValueAs: blankToNull })} />
-      <TextField label="Length (in)" type="number" inputMode="decimal" step="0.25" min="0" error={errors.lengthIn?.message} {...register('lengthIn', num)} />
+      <InchesField label="Length (in)" error={errors.lengthIn?.message} {...register('lengthIn')} />
       <SelectField label="Sawing method" error={errors.sawingMethod?.message} {...register('sawingMethod')}>
         {SAWING_METHODS.map((m) => <option key={m} value={m}>{SAWING_METHOD_LABELS[m]}</option>)}
       </SelectField>
-      <TextField label="Butt diameter (in)" type="number" inputMode="decimal" step="0.25" min="0" error={errors.buttDiameterIn?.message} {...register('buttDiameterIn', num)} />
-      <TextField label="Top diameter (in)" hint="The small end." type="number" inputMode="decimal" step="0.25" min="0" error={errors.topDiameterIn?.message} {...register('topDiameterIn', num)} />
+      <InchesField label="Butt diameter (in)" error={errors.buttDiameterIn?.message} {...register('buttDiameterIn')} />
+      <InchesField label="Top diameter (in)" hint="The small end." error={errors.topDiameterIn?.message} {...register('topDiameterIn')} />
       <TextAreaField className="sm:col-span-2" label="Where it came from" hint="Who gave or sold it and why it came down, e.g. “Storm-felled street tree, Alder Lane.”"
         error={errors.originNote?.message} {...register('originNote')} />
       <TextAreaField className="sm:col-span-2" label="Notes" error={errors.notes?.message} {...register('notes')} />

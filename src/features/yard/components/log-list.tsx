@@ -1,7 +1,7 @@
 import { Link } from 'react-router';
 import { useQuery } from '@tanstack/react-query';
 import { SAWING_METHOD_LABELS } from '../../../../shared/slabs';
-import { toSixteenths } from '../../../../shared/wood/index';
+import { Length } from '../../../lib/units';
 import { buttonClass } from '../../../components/ui/button';
 import { PageTitle } from '../../../components/ui/page-title';
 import { paths } from '../../../paths';
@@ -27,7 +27,7 @@ export function LogList() {
                 <tr key={l.id} className="border-b border-line">
                   <td className="p-2 font-semibold"><Link className="text-accent underline" to={paths.yardLog(l.id)}>{l.code}</Link></td>
                   <td className="p-2">{l.species.name}</td>
-                  <td className="p-2">{toSixteenths(l.lengthIn)} × {toSixteenths(l.buttDiameterIn)} / {toSixteenths(l.topDiameterIn)} in</td>
+                  <td className="p-2"><Length inches={l.lengthIn} /> × <Length inches={l.buttDiameterIn} /> / <Length inches={l.topDiameterIn} /></td>
                   <td className="p-2">{SAWING_METHOD_LABELS[l.sawingMethod]}</td>
                   <td className="p-2">{l.milledOn ?? 'Not yet'}</td>
                   <td className="p-2 text-right">{l.slabCount}</td>

@@ -3,7 +3,8 @@ import { areBookMatched } from '../../../../shared/slabs';
 import { useQuery } from '@tanstack/react-query';
 import { SAWING_METHOD_LABELS } from '../../../../shared/slabs';
 import { YARD_STATUS_LABELS } from '../../../../shared/slab-input';
-import { formatCents, roundBoardFeet, toSixteenths } from '../../../../shared/wood/index';
+import { formatCents } from '../../../../shared/wood/index';
+import { BoardFeet, Dimensions, Length } from '../../../lib/units';
 import type { LogSlab } from '../../../../shared/logs';
 import { buttonClass } from '../../../components/ui/button';
 import { PageTitle } from '../../../components/ui/page-title';
@@ -24,8 +25,8 @@ export function LogPage({ id }: { id: number }) {
         <Link to={paths.yardSlabNew({ logId: log.id })} className={buttonClass('primary')}>Add slab to this log</Link>
       </div>
       <dl className="grid grid-cols-2 gap-x-4 gap-y-1 sm:grid-cols-4">
-        <dt className="text-sm text-ink-soft">Length</dt><dd>{toSixteenths(log.lengthIn)} in</dd>
-        <dt className="text-sm text-ink-soft">Butt / top diameter</dt><dd>{toSixteenths(log.buttDiameterIn)} / {toSixteenths(log.topDiameterIn)} in</dd>
+        <dt className="text-sm text-ink-soft">Length</dt><dd><Length inches={log.lengthIn} /></dd>
+        <dt className="text-sm text-ink-soft">Butt / top diameter</dt><dd><Length inches={log.buttDiameterIn} /> / <Length inches={log.topDiameterIn} /></dd>
         <dt className="text-sm text-ink-soft">Felled</dt><dd>{log.felledOn ?? 'Unknown'}</dd>
         <dt className="text-sm text-ink-soft">Milled</dt><dd>{log.milledOn ?? 'Not yet'}</dd>
         <dt className="text-sm text-ink-soft">Sawing</dt><dd>{SAWING_METHOD_LABELS[log.sawingMethod]}</dd>
@@ -41,8 +42,8 @@ export function LogPage({ id }: { id: number }) {
                 <div className="flex flex-wrap items-center gap-3 rounded-md border border-line bg-surface-raised p-2">
                   <span className="w-8 text-right font-semibold">{s.sequenceInLog}</span>
                   <Link className="font-semibold text-accent underline" to={paths.yardSlab(s.id)}>{s.code}</Link>
-                  <span>{toSixteenths(s.thicknessIn)} × {toSixteenths(s.widthIn)} × {toSixteenths(s.lengthIn)} in</span>
-                  <span>{roundBoardFeet(s.boardFeet)} bd ft</span>
+                  <span><Dimensions of={s} /></span>
+                  <span><BoardFeet value={s.boardFeet} /></span>
                   <span>{formatCents(s.priceCents)}</span>
                   <Tag tone={s.status === 'listed' ? 'moss' : s.status === 'withdrawn' ? 'danger' : 'neutral'}>{YARD_STATUS_LABELS[s.status]}</Tag>
                 </div>

@@ -2,18 +2,19 @@ import type { FieldErrors, Resolver } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { createSlabSchema, updateSlabSchema, type CreateSlab, type UpdateSlab, type YardSlabDetail } from '../../../../shared/slab-input';
 import type { SlabStatus } from '../../../../shared/slabs';
+import { inchesForInput } from '../../../../shared/wood/index';
 
 /**
- * The form's own shape differs from the API's in two places only: widths are objects (so
- * useFieldArray can key them) and a set price is typed in dollars. Everything is still checked by
+ * The form's own shape differs from the API's in a few places: sizes are the text typed ("2 1/4",
+ * "8/4"), widths are objects (so useFieldArray can key them) and a set price is typed in dollars. Everything is still checked by
  * the shared zod schema; error paths are renamed back onto the form's fields.
  */
 export type SlabFormValues = {
   logId: number;
   sequenceInLog: number;
-  thicknessIn: number;
-  lengthIn: number;
-  widths: { value: number }[];
+  thicknessIn: string;
+  lengthIn: string;
+  widths: { value: string }[];
   liveEdge: 'none' | 'one' | 'both';
   figures: string[];
   figureNotes: string;
@@ -80,14 +81,14 @@ export function slabResolver(isNew: boolean): Resolver<SlabFormValues, unknown, 
 export function defaultsFor(slab: YardSlabDetail | undefined, logId: number | undefined): Partial<SlabFormValues> {
   if (!slab) {
     return {
-      logId: logId ?? Number.NaN, sequenceInLog: Number.NaN, widths: [{ value: Number.NaN }, { value: Number.NaN }, { value: Number.NaN }],
+      logId: logId ?? Number.NaN, sequenceInLog: Number.NaN, thicknessIn: '', lengthIn: '', widths: [{ value: '' }, { value: '' }, { value: '' }],
       liveEdge: 'both', figures: [], figureNotes: '', defects: [], yardStack: '', yardPosition: '',
       priceOverrideDollars: '', priceOverrideReason: '', description: '', status: 'drying',
     };
   }
   return {
-    logId: slab.logId, sequenceInLog: slab.sequenceInLog, thicknessIn: slab.thicknessIn, lengthIn: slab.lengthIn,
-    widths: slab.widthsIn.map((value) => ({ value })), liveEdge: slab.liveEdge as SlabFormValues['liveEdge'],
+    logId: slab.logId, sequenceInLog: slab.sequenceInLog, thicknessIn: inchesForInput(slab.thicknessIn), lengthIn: inchesForInput(slab.lengthIn),
+    widths: slab.widthsIn.map((w) => ({ value: inchesForInput(w) })), liveEdge: slab.liveEdge as SlabFormValues['liveEdge'],
     figures: slab.figures, figureNotes: slab.figureNotes, defects: slab.defects, yardStack: slab.yardStack,
     yardPosition: slab.yardPosition, priceOverrideDollars: slab.priceOverrideCents === null ? '' : (slab.priceOverrideCents / 100).toFixed(2),
     priceOverrideReason: slab.priceOverrideReason ?? '', description: slab.description, status: slab.status,

@@ -8,6 +8,7 @@ import { formatCents } from '../../../../shared/wood/index';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
+import { InchesField } from '../../../components/ui/inches-field';
 import { paths } from '../../../paths';
 import { figureKindsQuery, logListQuery, useSaveSlab } from '../api';
 import { DefectsField } from './defects-field';
@@ -55,8 +56,8 @@ export function SlabForm({ slab, logId, onSaved }: Props) {
       )}
       <TextField label="Place in the log (sequence)" hint={isNew ? 'Leave empty for the next free number.' : undefined} type="number" min="1" step="1"
         error={errors.sequenceInLog?.message} {...register('sequenceInLog', num)} />
-      <TextField label="Thickness (in)" type="number" inputMode="decimal" step="0.125" min="0" error={errors.thicknessIn?.message} {...register('thicknessIn', num)} />
-      <TextField label="Length (in)" type="number" inputMode="decimal" step="0.25" min="0" error={errors.lengthIn?.message} {...register('lengthIn', num)} />
+      <InchesField label="Thickness (in)" hint="2.25, 2 1/4 or 9/4 all work." error={errors.thicknessIn?.message} {...register('thicknessIn')} />
+      <InchesField label="Length (in)" error={errors.lengthIn?.message} {...register('lengthIn')} />
       <WidthsField control={control} register={register} errors={errors} />
       <SelectField label="Live edge" error={errors.liveEdge?.message} {...register('liveEdge')}>
         {LIVE_EDGE.map((e) => <option key={e} value={e}>{LIVE_EDGE_LABELS[e]}</option>)}

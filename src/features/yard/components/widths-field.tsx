@@ -1,8 +1,8 @@
 import { useFieldArray, useWatch, type Control, type FieldErrors, type UseFormRegister } from 'react-hook-form';
-import { averageWidthIn, boardFeet, roundBoardFeet, toSixteenths } from '../../../../shared/wood/index';
+import { averageWidthIn, boardFeet, formatBoardFeet, formatInches, parseInches } from '../../../../shared/wood/index';
 import { SLAB_LIMITS } from '../../../../shared/slab-input';
 import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/field';
+import { InchesField } from '../../../components/ui/inches-field';
 import type { SlabFormValues } from './slab-form-model';
 
 type Props = { control: Control<SlabFormValues>; register: UseFormRegister<SlabFormValues>; errors: FieldErrors<SlabFormValues> };
@@ -13,10 +13,11 @@ export function WidthsField({ control, register, errors }: Props) {
   const [widths, thicknessIn, lengthIn] = useWatch({ control, name: ['widths', 'thicknessIn', 'lengthIn'] });
   let live: string;
   try {
-    const avg = averageWidthIn(widths.map((w) => Number(w.value)));
-    live = `Average width ${toSixteenths(avg)} in`;
+    const avg = averageWidthIn(widths.map((w) => parseInches(w.value)));
+    live = `Average width ${formatInches(avg)}`;
     try {
-      live += ` · ${roundBoardFeet(boardFeet({ thicknessIn: Number(thicknessIn), widthIn: avg, lengthIn: Number(lengthIn) }))} board feet`;
+      const bf = boardFeet({ thicknessIn: parseInches(thicknessIn, { thickness: true }), widthIn: avg, lengthIn: parseInches(lengthIn) });
+      live += ` · ${formatBoardFeet(bf)}`;
     } catch { live += ' · board feet once thickness and length are in'; }
   } catch { live = 'Enter every width to see the average and board feet.'; }
   const rootError = errors.widths?.root?.message ?? errors.widths?.message;
@@ -28,8 +29,8 @@ export function WidthsField({ control, register, errors }: Props) {
       <div className="grid grid-cols-2 gap-2 sm:grid-cols-4">
         {fields.map((f, i) => (
           <div key={f.id} className="flex items-end gap-1">
-            <TextField className="flex-1" label={`Station ${i + 1}`} type="number" inputMode="decimal" step="0.125" min="0"
-              error={errors.widths?.[i]?.value?.message} {...register(`widths.${i}.value`, { valueAsNumber: true })} />
+            <InchesField className="flex-1" label={`Station ${i + 1}`}
+              error={errors.widths?.[i]?.value?.message} {...register(`widths.${i}.value`)} />
             {fields.length > SLAB_LIMITS.minStations && (
               <Button variant="quiet" aria-label={`Remove width ${i + 1}`} onClick={() => remove(i)}>✕</Button>
             )}
@@ -38,7 +39,7 @@ export function WidthsField({ control, register, errors }: Props) {
       </div>
       {rootError && <p role="alert" className="text-sm text-danger">{rootError}</p>}
       <div className="flex flex-wrap items-center gap-3">
-        <Button variant="secondary" disabled={fields.length >= SLAB_LIMITS.maxStations} onClick={() => append({ value: Number.NaN })}>Add a station</Button>
+        <Button variant="secondary" disabled={fields.length >= SLAB_LIMITS.maxStations} onClick={() => append({ value: '' })}>Add a station</Button>
         <p id="widths-live" aria-live="polite" className="font-semibold">{live}</p>
       </div>
     </fieldset>

@@ -9,10 +9,17 @@ CREATE TABLE "refund_lines" (
 );
 --> statement-breakpoint
 ALTER TABLE "order_lines" ADD COLUMN "tax_cents" integer DEFAULT 0 NOT NULL;--> statement-breakpoint
+ALTER TABLE "orders" ADD COLUMN "tax_cents" integer DEFAULT 0 NOT NULL;--> statement-breakpoint
+ALTER TABLE "orders" ADD COLUMN "checkout_session_id" text;--> statement-breakpoint
+ALTER TABLE "orders" ADD COLUMN "payment_url" text;--> statement-breakpoint
 ALTER TABLE "refund_lines" ADD CONSTRAINT "refund_lines_payment_id_payments_id_fk" FOREIGN KEY ("payment_id") REFERENCES "public"."payments"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "refund_lines" ADD CONSTRAINT "refund_lines_order_line_id_order_lines_id_fk" FOREIGN KEY ("order_line_id") REFERENCES "public"."order_lines"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 CREATE INDEX "refund_lines_payment_idx" ON "refund_lines" USING btree ("payment_id");--> statement-breakpoint
 CREATE INDEX "refund_lines_line_idx" ON "refund_lines" USING btree ("order_line_id");--> statement-breakpoint
+ALTER TABLE "orders" ADD CONSTRAINT "orders_checkout_session_id_unique" UNIQUE("checkout_session_id");--> statement-breakpoint
+-- Backfill: attempts that ended unpaid were stored as 'cancelled'; they are 'abandoned' attempts now.
+UPDATE "orders" SET "status" = 'abandoned' WHERE "status" = 'cancelled' AND "paid_at" IS NULL;
+--> statement-breakpoint
 -- Backfill: lines refunded before allocations existed give back their full wood and services, against the order's first refund.
 INSERT INTO "refund_lines" ("payment_id", "order_line_id", "wood_cents", "services_cents", "tax_cents")
 SELECT (SELECT p."id" FROM "payments" p WHERE p."order_id" = l."order_id" AND p."kind" = 'refund' AND p."status" = 'succeeded' ORDER BY p."id" LIMIT 1),
