@@ -44,6 +44,8 @@ export type OrderLineView = {
   priceLines: PriceLine[];
   slabCents: number;
   servicesCents: number;
+  /** This line's share of the order's sales tax; totalCents includes it. */
+  taxCents: number;
   totalCents: number;
   status: string;
 };
@@ -55,6 +57,8 @@ export type OrderView = {
   slabsCents: number;
   servicesCents: number;
   taxCents: number;
+  /** The approved resale certificate that exempted the order from sales tax, if any. */
+  taxExemptCertificate: string | null;
   totalCents: number;
   refundedCents: number;
   /** The hosted payment page while the attempt is open; null otherwise. */

@@ -12,3 +12,4 @@ export * from './orders';
 export * from './audit-log';
 export * from './email-outbox';
 export * from './buyer-lists';
+export * from './sales-terms';

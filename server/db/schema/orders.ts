@@ -16,6 +16,8 @@ export const orders = pgTable('orders', {
   servicesCents: integer('services_cents').notNull().default(0),
   /** Sales tax, its own line; totalCents includes it. */
   taxCents: integer('tax_cents').notNull().default(0),
+  /** The approved resale certificate that exempted this order from sales tax, as it was at checkout. */
+  taxExemptCertificate: text('tax_exempt_certificate'),
   totalCents: integer('total_cents').notNull(),
   refundedCents: integer('refunded_cents').notNull().default(0),
   totalWeightLb: doublePrecision('total_weight_lb').notNull(),

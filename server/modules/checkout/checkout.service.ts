@@ -10,6 +10,8 @@ import { quoteSlab } from '../pricing/slab-quote';
 import { isUniqueViolation } from '../holds/unique-violation';
 import { claimPickupPlace } from '../pickups/pickups.service';
 import { orderView } from './order-view';
+import { taxRuleFor } from '../sales-terms/sales-terms.service';
+import { taxForLines } from '../../../shared/sales-terms';
 import { chargeKey, closeAttempt } from './payment-settlement';
 import * as repo from './checkout.repo';
 
@@ -55,15 +57,20 @@ async function prepareOrder(db: Db, buyer: SessionUser, input: CheckoutInput, ke
         withFlattening: flatten, slabCents: q.breakdown.slabCents, servicesCents: q.breakdown.flatteningCents, totalCents: q.breakdown.totalCents,
       };
     });
+    // Sales tax is computed here once, on the server, and stored: every later view reads these numbers.
+    const rule = await taxRuleFor(tx, buyer.id);
+    const tax = taxForLines(lines, rule);
+    const taxed = lines.map((l, i) => ({ ...l, taxCents: tax.perLine[i], totalCents: l.slabCents + l.servicesCents + tax.perLine[i] }));
     const slabsCents = lines.reduce((t, l) => t + l.slabCents, 0);
     const servicesCents = lines.reduce((t, l) => t + l.servicesCents, 0);
     const order = await repo.insertOrder(tx, {
-      code: `pending-${key}`, buyerId: buyer.id, status: 'pending-payment', slabsCents, servicesCents, totalCents: slabsCents + servicesCents,
+      code: `pending-${key}`, buyerId: buyer.id, status: 'pending-payment', slabsCents, servicesCents,
+      taxCents: tax.taxCents, taxExemptCertificate: rule.certificate, totalCents: slabsCents + servicesCents + tax.taxCents,
       totalWeightLb: lines.reduce((t, l) => t + l.weightLb, 0), longestSlabIn: Math.max(...lines.map((l) => l.lengthIn)),
       loadingHelp: input.loadingHelp, pickupWindowId: window.id, pickupOn: input.pickupOn, idempotencyKey: key, createdAt: now,
     });
     const coded = await repo.updateOrder(tx, order.id, { code: orderCode(order.id, now) });
-    await repo.insertLines(tx, lines.map((l) => ({ ...l, orderId: order.id })));
+    await repo.insertLines(tx, taxed.map((l) => ({ ...l, orderId: order.id })));
     const graceUntil = new Date(now.getTime() + PAYMENT_GRACE_MS);
     await repo.keepHoldsUntil(tx, held.filter((h) => h.hold.expiresAt < graceUntil).map((h) => h.hold.id), graceUntil);
     return { order: coded, holdIds: held.map((h) => h.hold.id), slabIds };

@@ -17,7 +17,8 @@ export async function orderView(tx: Tx, id: number): Promise<OrderView & { buyer
   const attempt = isAttempt(order.status as OrderStatus);
   return {
     id: order.id, code: order.code, status: order.status as OrderStatus,
-    slabsCents: order.slabsCents, servicesCents: order.servicesCents, taxCents: order.taxCents, totalCents: order.totalCents,
+    slabsCents: order.slabsCents, servicesCents: order.servicesCents, taxCents: order.taxCents, taxExemptCertificate: order.taxExemptCertificate,
+    totalCents: order.totalCents,
     refundedCents: order.refundedCents, paymentUrl: order.status === 'pending-payment' ? order.paymentUrl : null,
     totalWeightLb: Math.round(order.totalWeightLb), longestSlabIn: order.longestSlabIn,
     heaviestSlabLb: Math.round(Math.max(0, ...lines.map((l) => l.weightLb))),
@@ -28,7 +29,7 @@ export async function orderView(tx: Tx, id: number): Promise<OrderView & { buyer
     lines: lines.map((l) => ({
       id: l.id, slabId: l.slabId, slabCode: l.slabCode, speciesName: l.speciesName, boardFeet: l.boardFeet,
       weightLb: Math.round(l.weightLb), lengthIn: l.lengthIn, withFlattening: l.withFlattening,
-      priceLines: (l.priceBreakdown as Breakdown)?.lines ?? [], slabCents: l.slabCents, servicesCents: l.servicesCents,
+      priceLines: (l.priceBreakdown as Breakdown)?.lines ?? [], slabCents: l.slabCents, servicesCents: l.servicesCents, taxCents: l.taxCents,
       totalCents: l.totalCents, status: l.status,
     })),
     buyer: { id: order.buyerId, email: found.buyerEmail, name: found.buyerName },
@@ -62,8 +63,9 @@ export async function orderEmailInput(tx: Tx, id: number, publicUrl: string) {
   return {
     to: o.buyer.email,
     input: {
-      name: o.buyer.name, code: o.code, totalCents: o.totalCents, totalWeightLb: o.totalWeightLb,
-      slabs: o.lines.map((l) => ({ code: l.slabCode, speciesName: l.speciesName, totalCents: l.totalCents, withFlattening: l.withFlattening })),
+      name: o.buyer.name, code: o.code, totalCents: o.totalCents, taxCents: o.taxCents, taxExemptCertificate: o.taxExemptCertificate, totalWeightLb: o.totalWeightLb,
+      // Lines before tax; the tax is its own line.
+      slabs: o.lines.map((l) => ({ code: l.slabCode, speciesName: l.speciesName, totalCents: l.slabCents + l.servicesCents, withFlattening: l.withFlattening })),
       pickup: { yardAddress: o.pickup?.yardAddress ?? 'the mill yard', on: o.pickup?.on ?? '', startsAt: o.pickup?.startsAt ?? '', endsAt: o.pickup?.endsAt ?? '' },
       bring: advice?.bring ?? [], vehicle: advice?.vehicle ?? '', loadingHelp: o.loadingHelp, caution: advice?.caution ?? '',
       url: `${publicUrl}/orders/${o.id}`,
