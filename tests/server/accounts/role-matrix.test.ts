@@ -28,6 +28,12 @@ const MATRIX: Row[] = [
   ['get', `/api/orders/${NONE}`, 'signed-in'],
   ['post', `/api/orders/${NONE}/payment-check`, 'signed-in'],
   ['post', `/api/orders/${NONE}/payment-cancel`, 'signed-in'],
+  ['get', '/api/account/resale-certificate', 'signed-in'],
+  ['put', '/api/account/resale-certificate', 'signed-in'],
+  ['get', '/api/office/sales-terms', ADMIN],
+  ['put', '/api/office/sales-terms', ADMIN],
+  ['get', '/api/office/resale-certificates', ADMIN],
+  ['post', `/api/office/resale-certificates/${NONE}/review`, ADMIN],
   ['get', '/api/pickup-slots', 'signed-in'],
   // yard desk (mill staff)
   ['get', '/api/logs', STAFF],
