@@ -11,6 +11,7 @@ import path from 'node:path';
 import { readEnv } from '../server/env';
 import { freePort } from '../server/lib/free-port';
 import { startStickerline } from '../server/start';
+import { createLogger } from '../server/lib/logger';
 
 async function main() {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'stickerline-e2e-data-'));
@@ -22,7 +23,7 @@ async function main() {
     START_LOCAL_FAKES: 'true', SEED_DEMO: 'true', BETTER_AUTH_SECRET: 'e2e-only-secret-e2e-only-secret-0123456789',
     DATABASE_URL: undefined, SMTP_HOST: undefined, SMTP_PORT: undefined, STRIPE_HOST: undefined, STRIPE_PORT: undefined,
   });
-  const running = await startStickerline({ env, log: () => {} });
+  const running = await startStickerline({ env, logger: createLogger({ level: 'warn' }) });
   console.log(`STICKERLINE_E2E_URL=${url} STICKERLINE_E2E_MAIL_PORT=${running.fakes!.mailWebPort}`);
   const stop = async () => {
     await running.stop();

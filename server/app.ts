@@ -8,6 +8,9 @@ import type { Auth } from './lib/auth';
 import type { Mailer } from './lib/mail';
 import type { Payments } from './lib/payments';
 import type { TrustProxy } from './lib/trust-proxy';
+import { getLogger, type Logger } from './lib/logger';
+import { requestLog } from './lib/request-log';
+import { healthRoutes } from './modules/health/health.routes';
 import { apiNotFound, errorMiddleware } from './lib/errors';
 import { loadUser } from './lib/session';
 import { sameOriginOnly } from './lib/same-origin';
@@ -29,6 +32,7 @@ import { readingRoutes } from './modules/readings/readings.routes';
 import { salesTermsRoutes } from './modules/sales-terms/sales-terms.routes';
 import { buyerListRoutes } from './modules/buyer-lists/buyer-lists.routes';
 import { shopAddressRoutes } from './modules/shop-address/shop-address.routes';
+import { matchedSetRoutes } from './modules/matched-sets/matched-sets.routes';
 
 export type AppDeps = {
   db: Db;
@@ -48,12 +52,22 @@ export type AppDeps = {
   trustedOrigins?: string[];
   /** Which hops may tell the client's address and scheme (TRUST_PROXY); default none. */
   trustProxy?: TrustProxy;
+  /** Where request lines go; default the process logger. */
+  logger?: Logger;
+  /** True once shutdown has begun: /api/ready answers 503 and responses close their connection. */
+  isShuttingDown?: () => boolean;
 };
 
 export function createApp(deps: AppDeps) {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', deps.trustProxy ?? false);
+  app.use(requestLog(deps.logger ?? getLogger()));
+  if (deps.isShuttingDown) {
+    const shuttingDown = deps.isShuttingDown;
+    // Keep-alive clients are told to reconnect elsewhere (or later) once shutdown has begun.
+    app.use((_req, res, next) => { if (shuttingDown()) res.setHeader('Connection', 'close'); next(); });
+  }
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -90,7 +104,7 @@ export function createApp(deps: AppDeps) {
   api.use(sameOriginOnly(deps.trustedOrigins ?? []));
   api.use(writeLimit(deps.writeLimitPerMinute ?? 300));
   api.use(loadUser(deps.auth));
-  api.get('/health', (_req, res) => { res.json({ ok: true }); });
+  api.use(healthRoutes(deps));
   api.use(catalogueRoutes(deps));
   api.use(accountRoutes(deps));
   api.use(preferenceRoutes(deps));
@@ -102,6 +116,7 @@ export function createApp(deps: AppDeps) {
   api.use(logRoutes(deps));
   api.use(yardSlabRoutes(deps));
   api.use(readingRoutes(deps));
+  api.use(matchedSetRoutes(deps));
   api.use(officeRoutes(deps));
   api.use(millRulesRoutes(deps));
   api.use(salesTermsRoutes(deps));

@@ -52,6 +52,11 @@ export const envSchema = z.object({
   PAYMENTS_TEST_MODE: z.enum(['true', 'false']).optional(),
   /** Production only: true when a real mail relay listens on this machine (SMTP_HOST on loopback). */
   SMTP_LOCAL_RELAY: z.enum(['true', 'false']).optional(),
+  /** Log lines: json (one object a line) or pretty (readable); default pretty in development, else json. */
+  LOG_FORMAT: z.enum(['json', 'pretty']).optional(),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
+  /** On SIGTERM, how long requests in flight may take to finish before their connections are closed. */
+  SHUTDOWN_GRACE_MS: z.coerce.number().int().min(0).max(120_000).default(10_000),
   /** IANA time zone of the yard; pickup windows are wall-clock times there. */
   MILL_TIME_ZONE: z.string().default('UTC').refine((tz) => {
     try { new Intl.DateTimeFormat('en-US', { timeZone: tz }); return true; } catch { return false; }

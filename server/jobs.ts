@@ -1,5 +1,6 @@
 import type { Db } from './db/client';
 import type { Mailer } from './lib/mail';
+import { getLogger } from './lib/logger';
 import { flushOutbox } from './lib/outbox';
 import { releaseExpiredHolds } from './modules/holds/holds.service';
 import { queuePickupReminders } from './modules/checkout/pickup-reminders';
@@ -16,12 +17,30 @@ const JOBS: Job[] = [
 ];
 
 export function startBackgroundJobs(deps: JobDeps) {
+  const running = new Set<Promise<unknown>>();
+  let stopped = false;
   const timers = JOBS.map((job) => {
-    const tick = () => job.run(deps).catch((err) => console.error(`[job ${job.name}]`, err));
-    void tick();
+    let busy = false;
+    const tick = () => {
+      // A slow run is not stacked on by the next tick, and nothing starts once stopping has begun.
+      if (busy || stopped) return;
+      busy = true;
+      const run = job.run(deps)
+        .catch((err) => getLogger().error({ part: 'job', job: job.name, err }, 'a background job failed'))
+        .finally(() => { busy = false; running.delete(run); });
+      running.add(run);
+    };
+    tick();
     const t = setInterval(tick, job.everyMs);
     t.unref();
     return t;
   });
-  return { stop: () => timers.forEach(clearInterval) };
+  return {
+    /** Stops the timers and waits for runs already under way. */
+    async stop() {
+      stopped = true;
+      timers.forEach(clearInterval);
+      await Promise.allSettled([...running]);
+    },
+  };
 }

@@ -14,17 +14,23 @@ import { createApp } from './app';
 import { seedDemo } from './seed/seed-demo';
 import { ensureMillSettings } from './modules/mill-rules/mill-rules.service';
 import { startBackgroundJobs } from './jobs';
+import { getLogger, type Logger } from './lib/logger';
+import { gracefulCloser } from './lib/graceful-close';
 
 /** Keys starting sk_test_local are placeholders that only the local fake accepts. */
 export const usesLocalPaymentFake = (secretKey: string) => secretKey.startsWith('sk_test_local');
 
-export type StartOptions = { env: Env; dev?: boolean; log?: (msg: string) => void };
+export type StartOptions = { env: Env; dev?: boolean; logger?: Logger };
 
 export type Running = {
   url: string;
   apiPort: number;
   fakes: LocalFakes | null;
   database: Database;
+  /**
+   * Graceful stop: no new connections, requests in flight finish (connections still busy after
+   * SHUTDOWN_GRACE_MS are closed), timers stop, then the database closes.
+   */
   stop(): Promise<void>;
 };
 
@@ -33,7 +39,7 @@ export type Running = {
  * migrations and demo data, the API (and Vite in dev). Used by `npm start`, `npm run dev` and the
  * browser tests.
  */
-export async function startStickerline({ env, dev = false, log = console.log }: StartOptions): Promise<Running> {
+export async function startStickerline({ env, dev = false, logger = getLogger() }: StartOptions): Promise<Running> {
   const production = env.NODE_ENV === 'production';
   // Production refuses the demo's defaults before anything starts (see server/production-checks.ts).
   const problems = production ? configProblems(env) : [];
@@ -73,14 +79,16 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
   const auth = createAuth({ db: database.db, secret: authSecret(env.BETTER_AUTH_SECRET, env.DATA_DIR, production), baseURL: url, trustedOrigins, mailer });
 
   if (wantsDemoData(env)) {
-    await seedDemo({ db: database.db, auth, uploadsDir: env.UPLOADS_DIR, log: (m: string) => log(`[seed] ${m}`) });
+    await seedDemo({ db: database.db, auth, uploadsDir: env.UPLOADS_DIR, log: (m: string) => logger.info({ part: 'seed' }, m) });
   }
   await ensureMillSettings(database.db);
 
+  let shuttingDown = false;
   const payments = createPayments({ secretKey: env.STRIPE_SECRET_KEY, ...stripe, webhookSecret: env.STRIPE_WEBHOOK_SECRET });
   const app = createApp({
     db: database.db, auth, mailer, payments, publicUrl: url, uploadsDir: env.UPLOADS_DIR,
     clientDir: dev ? undefined : 'dist', trustedOrigins, trustProxy: env.TRUST_PROXY,
+    logger, isShuttingDown: () => shuttingDown,
   });
   const jobs = startBackgroundJobs({ db: database.db, mailer, publicUrl: url });
   const server: Server = await new Promise((resolve) => {
@@ -88,6 +96,7 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
   });
   // The local payment fake posts its signed events straight to this process (a live account has its endpoint registered instead).
   paymentFake?.addWebhookEndpoint({ url: `http://127.0.0.1:${apiPort}/api/webhooks/payments`, secret: env.STRIPE_WEBHOOK_SECRET });
+  const closer = gracefulCloser(server, logger);
 
   let vite: { close(): Promise<void> } | null = null;
   if (dev) {
@@ -101,10 +110,12 @@ export async function startStickerline({ env, dev = false, log = console.log }: 
   return {
     url, apiPort, fakes, database,
     async stop() {
-      jobs.stop();
+      if (shuttingDown) return;
+      shuttingDown = true;
+      const jobsStopped = jobs.stop();
       await vite?.close();
-      server.closeAllConnections?.();
-      await new Promise((r) => server.close(() => r(null)));
+      await closer.close(env.SHUTDOWN_GRACE_MS);
+      await jobsStopped;
       mailer.close();
       await database.close();
       await fakes?.stop();

@@ -7,11 +7,12 @@ export const DEFAULT_HOLD_HOURS = 48;
 export const HOLD_STATUSES = ['active', 'released', 'expired', 'converted'] as const;
 export type HoldStatus = (typeof HOLD_STATUSES)[number];
 
-/** A book-matched pair: two neighbouring slabs from the same log, reserved together or not at all. */
+/** Slabs of one book-matched set the yard marked (shared/matched-sets.ts), reserved together or not at all. */
 export const matchedSetSchema = z.object({
   slabIds: z.array(z.number().int().positive(), { error: 'Choose the slabs to reserve' })
-    .length(2, 'A matched pair is exactly two slabs')
-    .refine((ids) => ids[0] !== ids[1], 'Choose two different slabs'),
+    .min(2, 'Choose at least two slabs of the set')
+    .max(6, 'A matched set is at most 6 slabs')
+    .refine((ids) => new Set(ids).size === ids.length, 'Choose each slab once'),
 }).strict();
 export type MatchedSetInput = z.infer<typeof matchedSetSchema>;
 

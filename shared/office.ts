@@ -126,6 +126,11 @@ export type SalesMoney = {
 };
 export type MonthlySpeciesSales = SalesMoney & { month: string; speciesName: string; boardFeet: number; slabs: number };
 export type SlabStatusCount = { status: string; count: number };
+export type DryingStockForecast = {
+  id: number; code: string; speciesName: string; thicknessIn: number; moisturePercent: number | null;
+  expectedOn: string | null; earliestOn: string | null; latestOn: string | null; basis: string;
+};
+
 export type MillNumbers = {
   sales: MonthlySpeciesSales[];
   /** Over all months: equals the sum of the paid orders' amounts and refunds, to the cent. */
@@ -133,4 +138,6 @@ export type MillNumbers = {
   statusCounts: SlabStatusCount[];
   averageDaysMilledToSold: number | null;
   soldSlabsWithMillDate: number;
+  /** Slabs still drying, soonest expected air-dry date first (at most 200). */
+  dryingStock: DryingStockForecast[];
 };

@@ -1,3 +1,4 @@
+import type { DryingForecast } from './wood/index';
 import { z } from 'zod';
 import { METER_KINDS } from './slabs';
 import type { DryingState } from './wood/index';
@@ -148,6 +149,8 @@ export type SlabReadings = {
   targetMcPercent: number;
   /** One year per inch of thickness from the milling date (common practice); null without a milling date. */
   airDryReadyOn: string | null;
+  /** When the slab should reach the air-dry line, from its vouched-for readings (or the rule of thumb). */
+  dryingForecast: DryingForecast;
 };
 
 /**

@@ -1,5 +1,6 @@
 import type { DryingForecast, LiftingAdvice } from './wood/index';
 import { z } from 'zod';
+import type { MatchedSetView } from './matched-sets';
 import { parseInches } from './wood/format';
 
 export const SLAB_STATUSES = ['drying', 'ready', 'listed', 'held', 'sold', 'picked-up', 'withdrawn'] as const;
@@ -160,6 +161,8 @@ export type SlabDetail = Omit<SlabListItem, 'species'> & {
   photos: SlabPhotoView[];
   moistureReadings: MoistureReadingView[];
   neighbours: LogNeighbour[];
+  /** The book-matched set the yard marked this slab into (the one record of "book-matched"), or null. */
+  matchedSet: MatchedSetView | null;
   /** How the price is worked out; for a sold slab the breakdown recorded at its sale (null when none was). */
   priceBreakdown: PriceBreakdownView | null;
   /** Estimated weight at the latest reading, or at the species' typical green MC when there is none. */
@@ -200,9 +203,3 @@ export const SAWING_METHOD_LABELS: Record<(typeof SAWING_METHODS)[number], strin
   'live-edge-slabbing': 'Live-edge slabbing',
 };
 
-/**
- * Slabs sawn one after the other from the same log open like a book: their facing sides mirror
- * each other (common practice). The one rule for "book-matched" across the shop.
- */
-export const areBookMatched = (a: { logId: number; sequenceInLog: number }, b: { logId: number; sequenceInLog: number }) =>
-  a.logId === b.logId && Math.abs(a.sequenceInLog - b.sequenceInLog) === 1;

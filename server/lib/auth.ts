@@ -5,6 +5,7 @@ import { adminAc, userAc } from 'better-auth/plugins/admin/access';
 import type { Db } from '../db/client';
 import * as schema from '../db/schema/index';
 import type { Mailer } from './mail';
+import { getLogger } from './logger';
 import { emailChangeEmail, passwordResetEmail } from './email-templates';
 
 export const ROLES = ['buyer', 'seller', 'admin'] as const;
@@ -83,6 +84,8 @@ export function createAuth({ db, secret, baseURL, trustedOrigins, mailer, signIn
       },
     },
     telemetry: { enabled: false },
+    // The library's own warnings go to the process log, scrubbed like every other line.
+    logger: { log: (level, message) => getLogger()[level]({ part: 'auth' }, message) },
   });
 }
 

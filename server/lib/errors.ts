@@ -61,6 +61,7 @@ export const errorMiddleware: ErrorRequestHandler = (err, req, res, _next) => {
     res.status(status).json(body('bad_request', message));
     return;
   }
-  console.error(`[error] ${req.method} ${req.originalUrl}`, err);
+  // The request log line carries it (with the request id), once.
+  (res as typeof res & { err?: unknown }).err = err;
   res.status(500).json(body('internal', 'Something went wrong on our side. Please try again.'));
 };

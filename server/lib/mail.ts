@@ -1,7 +1,13 @@
 import nodemailer from 'nodemailer';
+import { getLogger } from './logger';
 
 export type MailMessage = { to: string; subject: string; html: string; text: string };
-export type Mailer = { send(message: MailMessage): Promise<void>; close(): void };
+export type Mailer = {
+  send(message: MailMessage): Promise<void>;
+  /** Connects to the mail server and says hello, without sending (readiness check). */
+  verify(): Promise<void>;
+  close(): void;
+};
 
 export type MailerOptions = { host: string; port: number; from: string; retries?: number; retryDelayMs?: number };
 
@@ -17,11 +23,14 @@ export function createMailer({ host, port, from, retries = 3, retryDelayMs = 200
           return;
         } catch (err) {
           lastError = err;
-          console.warn(`[mail] attempt ${attempt}/${retries} to ${message.to} failed: ${(err as Error).message}`);
+          getLogger().warn({ part: 'mail', to: message.to, attempt, of: retries, reason: (err as Error).message }, 'sending an e-mail failed');
           await new Promise((r) => setTimeout(r, retryDelayMs * attempt));
         }
       }
       throw lastError;
+    },
+    async verify() {
+      await transport.verify();
     },
     close: () => transport.close(),
   };

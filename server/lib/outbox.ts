@@ -3,6 +3,7 @@ import type { Db, Tx } from '../db/client';
 import { emailOutbox } from '../db/schema/index';
 import type { EmailContent } from './email-templates';
 import type { Mailer } from './mail';
+import { getLogger } from './logger';
 
 /** After this many failed sends a row is parked as 'failed' (kept, never deleted) for a person to look at. */
 export const MAX_ATTEMPTS = 8;
@@ -48,7 +49,8 @@ export function flushOutbox(db: Db, mailer: Mailer, { now = new Date(), limit = 
         const attempts = row.attempts + 1;
         const message = (err as Error).message ?? String(err);
         const giveUp = attempts >= MAX_ATTEMPTS;
-        console.warn(`[outbox] e-mail ${id} (${row.kind}) to ${row.toAddress} failed, attempt ${attempts}: ${message}${giveUp ? ' — parked as failed' : ''}`);
+        getLogger().warn({ part: 'outbox', emailId: id, kind: row.kind, to: row.toAddress, attempt: attempts, reason: message, parked: giveUp },
+          giveUp ? 'an e-mail failed too often and is parked as failed' : 'an e-mail failed; it will be retried');
         await db.update(emailOutbox).set({
           attempts, lastError: message.slice(0, 500), status: giveUp ? 'failed' : 'pending',
           sendAfter: new Date(now.getTime() + retryDelayMs(attempts)),

@@ -1,5 +1,6 @@
 import Stripe from 'stripe';
 import { AppError } from './errors';
+import { getLogger } from './logger';
 
 export type PaymentPageLine = { name: string; amountCents: number };
 export type PaymentPageInput = {
@@ -40,6 +41,8 @@ export type Payments = {
   closePaymentPage(sessionId: string): Promise<PaymentPageState>;
   refund(input: RefundInput): Promise<RefundResult>;
   parseWebhook(rawBody: Buffer | string, signatureHeader: string | undefined): PaymentEvent;
+  /** One cheap authenticated read, to tell that the payment service answers (readiness check). */
+  ping(): Promise<void>;
 };
 
 export type PaymentsOptions = {
@@ -54,7 +57,7 @@ export type PaymentsOptions = {
 /** Turns provider errors into AppErrors; anything unknown stays a 502. */
 function translate(err: unknown): never {
   if (err instanceof Stripe.errors.StripeError) {
-    console.error(`[payments] ${err.type}: ${err.message}`);
+    getLogger().error({ part: 'payments', type: err.type, reason: err.message }, 'the payment service answered with an error');
     throw new AppError(502, 'payment_unavailable', 'The payment service did not answer as expected. Nothing was charged; please try again.');
   }
   throw err;
@@ -135,6 +138,9 @@ export function createPayments({ secretKey, host, port, protocol, webhookSecret,
       } catch (err) {
         return translate(err);
       }
+    },
+    async ping() {
+      await stripe.customers.list({ limit: 1 });
     },
     parseWebhook(rawBody, signatureHeader) {
       if (!signatureHeader) throw new AppError(400, 'bad_signature', 'The event is not signed.');

@@ -25,6 +25,8 @@ export type DemoSlab = CutSlab & {
   code: string; logCode: string; speciesSlug: string; widthIn: number; dryingState: DryingState;
   status: 'drying' | 'ready' | 'listed' | 'withdrawn'; yardStack: string; yardPosition: string;
   description: string; createdAt: Date; listedAt: Date | null; readings: DemoReading[]; illustrationSeed: number;
+  /** The slab sawn just before this one, when the demo yard marks the two as a book-matched pair. */
+  bookMatchedWith: string | null;
 };
 
 export type DemoData = {
@@ -83,8 +85,10 @@ export function buildDemoData(now: Date = new Date()): DemoData {
       const dryingState = dryingStateFor({ mcPercent: latest.mcPercent, targetMcPercent: DEMO_MILL_SETTINGS.targetMcPercent });
       const status = statusFor(plan, slab, dryingState, latest.mcPercent, movedIndoorsOn, today);
       const firstDryish = readings.find((r) => r.mcPercent <= 24) ?? latest;
+      // The demo yard marks a pair when two slabs sawn in a row show the same figure, each slab in one pair at most.
       const prev = cut[i - 1];
-      const bookMatch = prev && prev.figures.length > 0 && prev.figures.join() === slab.figures.join()
+      const prevTaken = i >= 2 && slabs[slabs.length - 1]?.bookMatchedWith !== null;
+      const bookMatchedWith = prev && !prevTaken && prev.figures.length > 0 && prev.figures.join() === slab.figures.join()
         ? `${code}-${String(prev.sequenceInLog).padStart(2, '0')}` : null;
       slabs.push({
         ...slab, code: slabCode, logCode: code, speciesSlug: plan.speciesSlug,
@@ -93,7 +97,8 @@ export function buildDemoData(now: Date = new Date()): DemoData {
         yardPosition: movedIndoorsOn
           ? `rack ${1 + (logIndex % 4)}, shelf ${slab.sequenceInLog}`
           : `row ${1 + (logIndex % 3)}, ${ordinal(slab.sequenceInLog)} from top`,
-        description: describeSlab(slab, plan.speciesSlug, bookMatch),
+        description: describeSlab(slab, plan.speciesSlug),
+        bookMatchedWith,
         createdAt: new Date(milled.getTime() + (17 * 60 + slab.sequenceInLog * 7) * 60_000),
         listedAt: status === 'listed'
           ? new Date(Math.min(addDays(new Date(`${firstDryish.measuredOn}T00:00:00Z`), 3).getTime(), today.getTime()) + 10 * 3_600_000)

@@ -26,10 +26,10 @@ const USES: Record<string, string> = {
   narrow: 'Suits a shelf, a mantel or a small side table.',
 };
 
-export function describeSlab(slab: CutSlab, speciesSlug: string, bookMatchCode: string | null): string {
+/** The slab's own looks and uses; book-matching is said by the slab page from the yard's marked set. */
+export function describeSlab(slab: CutSlab, speciesSlug: string): string {
   const minWidth = Math.min(...slab.widthsIn);
   const use = minWidth >= 20 && slab.lengthIn >= 84 ? USES.wide : minWidth >= 13 ? USES.bench : USES.narrow;
   const first = `${LOOKS[speciesSlug] ?? 'Sound wood'}, ${EDGE_WORDS[slab.liveEdge]}.`;
-  const pair = bookMatchCode ? ` Book-matches with ${bookMatchCode}, the next slab in the log.` : '';
-  return `${first} ${use}${pair}`;
+  return `${first} ${use}`;
 }

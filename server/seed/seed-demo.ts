@@ -6,7 +6,7 @@
 import { count } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import {
-  closedDays, figureKinds, logs, millSettings, moistureReadings, pickupWindows, slabPhotos, slabs, species,
+  closedDays, figureKinds, logs, matchedSetSlabs, matchedSets, millSettings, moistureReadings, pickupWindows, slabPhotos, slabs, species,
 } from '../db/schema/index';
 import type { Auth } from '../lib/auth';
 import { loadPricingRules } from '../modules/pricing/pricing.service';
@@ -77,6 +77,12 @@ export async function seedDemo({ db, auth, uploadsDir, log = () => {}, now = new
         };
       })).returning({ id: slabs.id, code: slabs.code });
       const slabIdByCode = new Map(slabRows.map((r) => [r.code, r.id]));
+
+      // The demo yard's book-matched pairs, recorded the way the yard marks them.
+      for (const s of data.slabs.filter((x) => x.bookMatchedWith)) {
+        const [set] = await tx.insert(matchedSets).values({ logId: logIdByCode.get(s.logCode)!, markedBy: recordedBy, createdAt: s.createdAt }).returning();
+        await tx.insert(matchedSetSlabs).values([s.bookMatchedWith!, s.code].map((code) => ({ setId: set.id, slabId: slabIdByCode.get(code)! })));
+      }
 
       const readings = data.slabs.flatMap((s) => s.readings.map((r) => ({
         ...r, slabId: slabIdByCode.get(s.code)!, recordedBy,

@@ -2,10 +2,20 @@ import type { ApiErrorBody } from '../../shared/errors';
 
 /** An API error with the server's code, message and per-field messages. */
 export class ApiError extends Error {
-  constructor(public status: number, public code: string, message: string, public fieldErrors: Record<string, string[]> = {}) {
+  constructor(
+    public status: number,
+    public code: string,
+    message: string,
+    public fieldErrors: Record<string, string[]> = {},
+    /** The server's id for this request (X-Request-Id), for a buyer to quote to the mill. */
+    public requestId?: string,
+  ) {
     super(message);
   }
 }
+
+/** Reads the request id the server put on a response. */
+export const requestIdOf = (res: Response) => res.headers.get('X-Request-Id') ?? undefined;
 
 /** Plain words for the statuses a person can meet. */
 export function friendlyMessage(error: unknown): string {
@@ -13,7 +23,9 @@ export function friendlyMessage(error: unknown): string {
     if (error.status === 401) return error.message || 'Please sign in to continue.';
     if (error.status === 403) return error.message || 'Your account cannot do this.';
     if (error.status === 429) return error.message || 'Too many tries. Please wait a minute and try again.';
-    if (error.status >= 500) return 'Something went wrong on our side. Please try again in a moment.';
+    if (error.status >= 500) {
+      return `Something went wrong on our side. Please try again in a moment.${error.requestId ? ` If it keeps happening, tell the mill reference ${error.requestId}.` : ''}`;
+    }
     return error.message;
   }
   return 'We could not reach the yard office. Check your connection and try again.';
@@ -44,7 +56,7 @@ export async function apiFetch<T>(path: string, { body, query, headers, ...init 
     const err = (data as ApiErrorBody | null)?.error;
     // The auth library answers { message, code } rather than our { error } shape.
     const authMessage = data && typeof data === 'object' && 'message' in data ? String((data as { message: unknown }).message) : undefined;
-    throw new ApiError(res.status, err?.code ?? 'error', err?.message ?? authMessage ?? res.statusText, err?.fieldErrors ?? {});
+    throw new ApiError(res.status, err?.code ?? 'error', err?.message ?? authMessage ?? res.statusText, err?.fieldErrors ?? {}, requestIdOf(res));
   }
   return data as T;
 }

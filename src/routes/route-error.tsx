@@ -15,10 +15,16 @@ export function RouteError() {
   const error = useRouteError();
   const status = isRouteErrorResponse(error) ? error.status : error instanceof ApiError ? error.status : 500;
   const [title, text] = MESSAGES[status] ?? ['Something went wrong', 'Please try again in a moment.'];
+  const requestId = error instanceof ApiError ? error.requestId : undefined;
   return (
     <div className="mx-auto flex max-w-xl flex-col gap-3 py-10">
       <PageTitle>{title}</PageTitle>
       <p>{text}</p>
+      {requestId && (
+        <p className="text-sm text-ink-soft">
+          If you contact the mill about this, quote reference <strong className="font-mono text-ink">{requestId}</strong>.
+        </p>
+      )}
       <p className="flex gap-4">
         <Link to={paths.catalogue()} className="text-accent underline">Back to the slabs</Link>
         {status === 401 && <Link to={paths.signIn()} className="text-accent underline">Sign in</Link>}

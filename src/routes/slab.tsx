@@ -28,16 +28,15 @@ function SlabExtras({ slabId }: { slabId: number }) {
   );
 }
 
-/** Reserve, with a book-matched pair offered when a neighbouring slab of the same log is also for sale. */
+/** Reserve, with the rest of the slab's book-matched set (as the yard marked it) offered when it is for sale too. */
 function SlabActions({ slabId }: { slabId: number }) {
   const { data: slab } = useQuery(slabDetailQuery(slabId));
   const { data: me } = useQuery(meQuery());
   if (!slab) return null;
-  const neighbour = slab.neighbours.find((n) => !n.isThisSlab && n.status === 'listed' && n.sequenceInLog === slab.sequenceInLog + 1)
-    ?? slab.neighbours.find((n) => !n.isThisSlab && n.status === 'listed' && n.sequenceInLog === slab.sequenceInLog - 1);
+  const partners = (slab.matchedSet?.slabs ?? []).filter((m) => m.id !== slab.id && m.status === 'listed').map((m) => ({ id: m.id, code: m.code }));
   return (
     <>
-      <ReserveButton slabId={slab.id} slabCode={slab.code} status={slab.status} matchedNeighbour={neighbour ? { id: neighbour.id, code: neighbour.code } : null} />
+      <ReserveButton slabId={slab.id} slabCode={slab.code} status={slab.status} setPartners={partners} />
       <SlabInterest slabId={slab.id} code={slab.code} status={slab.status} signedIn={!!me} />
       <StaffLinks slabId={slab.id} />
     </>

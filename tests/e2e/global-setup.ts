@@ -5,6 +5,7 @@ import type { TestProject } from 'vitest/node';
 import { readEnv } from '../../server/env';
 import { freePort } from '../../server/lib/free-port';
 import { startStickerline, type Running } from '../../server/start';
+import { createLogger } from '../../server/lib/logger';
 
 /**
  * Once per browser run: start the REAL product in this process — built client from dist/,
@@ -42,7 +43,7 @@ export default async function setup(project: TestProject) {
       STRIPE_PROTOCOL: undefined, MAILDEV_WEB_PORT: undefined,
     });
     const started = performance.now();
-    running = await startStickerline({ env, log: () => {} });
+    running = await startStickerline({ env, logger: createLogger({ level: 'warn' }) });
     console.log(`[e2e] Stickerline up at ${url} in ${((performance.now() - started) / 1000).toFixed(1)} s`);
   } catch (e) {
     removeDirs();

@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
 import type { Db } from '../../server/db/client';
-import { logs, moistureReadings, slabPhotos, slabs, species } from '../../server/db/schema/index';
+import { logs, matchedSetSlabs, matchedSets, moistureReadings, slabPhotos, slabs, species } from '../../server/db/schema/index';
 import { getSpecies } from '../../shared/wood/index';
 import { DEFAULT_PRICING_RULES } from '../../shared/wood/index';
 import { derivedSlabColumns } from '../../server/modules/slabs/slab-derived';
@@ -47,4 +47,11 @@ export async function slabRow(db: Db, log: typeof logs.$inferSelect, over: SlabO
   }
   if (photo) await db.insert(slabPhotos).values({ slabId: row.id, fileKey: `test${row.id}x${++seq}`, width: 1200, height: 400, isCover: true });
   return row;
+}
+
+/** Marks slabs of one log as a book-matched set, as the yard does on the log page. */
+export async function matchedSetRow(db: Db, slabList: Array<typeof slabs.$inferSelect>) {
+  const [set] = await db.insert(matchedSets).values({ logId: slabList[0].logId }).returning();
+  await db.insert(matchedSetSlabs).values(slabList.map((s) => ({ setId: set.id, slabId: s.id })));
+  return set;
 }

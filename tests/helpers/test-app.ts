@@ -9,6 +9,7 @@ import { createAuth, type Role } from '../../server/lib/auth';
 import { createMailer } from '../../server/lib/mail';
 import { createPayments } from '../../server/lib/payments';
 import type { TrustProxy } from '../../server/lib/trust-proxy';
+import type { Logger } from '../../server/lib/logger';
 import { user } from '../../server/db/schema/index';
 import { freshDatabase } from './test-db';
 
@@ -27,6 +28,8 @@ export type TestAppOptions = {
   trustedOrigins?: string[];
   /** Default 'loopback': supertest connects over loopback, so tests can pose as clients behind a proxy. */
   trustProxy?: TrustProxy;
+  /** Where request lines go (tests that read the log); default the process logger. */
+  logger?: Logger;
 };
 
 export async function createTestApp(opts: TestAppOptions = {}) {
@@ -41,7 +44,7 @@ export async function createTestApp(opts: TestAppOptions = {}) {
   });
   const payments = createPayments({ secretKey: 'sk_test_local_fake', host: '127.0.0.1', port: inject('stripePort'), protocol: 'http', webhookSecret: TEST_WEBHOOK_SECRET });
   const app = createApp({ db: database.db, auth, mailer, payments, uploadsDir, trustedOrigins, holdHours: opts.holdHours,
-    writeLimitPerMinute: opts.writeLimitPerMinute ?? 0, trustProxy: opts.trustProxy ?? ['loopback'] });
+    writeLimitPerMinute: opts.writeLimitPerMinute ?? 0, trustProxy: opts.trustProxy ?? ['loopback'], logger: opts.logger });
 
   /** Signs up a new account with `role` and returns a cookie-keeping agent for it. */
   async function signedInAs(role: Role, name = `${role} ${++counter}`) {

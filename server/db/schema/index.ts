@@ -11,5 +11,6 @@ export * from './pickups';
 export * from './orders';
 export * from './audit-log';
 export * from './email-outbox';
+export * from './matched-sets';
 export * from './buyer-lists';
 export * from './sales-terms';

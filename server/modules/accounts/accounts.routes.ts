@@ -1,11 +1,10 @@
 import { Router } from 'express';
-import { requireUser } from '../../lib/session';
 
 export function accountRoutes(_deps: object) {
   const router = Router();
-  /** Who am I: 401 for visitors so the client can tell them apart. */
-  router.get('/me', requireUser, (req, res) => {
-    res.json({ user: req.user });
+  /** Who am I: { user: null } for visitors — a normal answer, not an error, on every signed-out page. */
+  router.get('/me', (req, res) => {
+    res.json({ user: req.user ?? null });
   });
   return router;
 }

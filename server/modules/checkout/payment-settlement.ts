@@ -1,5 +1,6 @@
 import type { Db, Tx } from '../../db/client';
 import { recordAudit } from '../../lib/audit';
+import { getLogger } from '../../lib/logger';
 import type { PaymentPageState, Payments } from '../../lib/payments';
 import { queueEmail } from '../../lib/outbox';
 import { orderConfirmationEmail } from '../../lib/email-templates';
@@ -65,7 +66,7 @@ export async function applyPageState(deps: SettleDeps, page: PaymentPageState, n
     if (order.status !== 'pending-payment') return 'already-settled';
     if (page.status === 'complete' && page.paid && page.chargeId) {
       if (!matches(order, page)) {
-        console.error(`[checkout] payment page ${page.sessionId} does not match order ${order.code}; not taken as payment`);
+        getLogger().error({ part: 'checkout', order: order.code, sessionId: page.sessionId }, 'a paid payment page does not match its order; not taken as payment');
         return 'open';
       }
       if (await complete(tx, deps, order, page.chargeId, now)) return 'paid';

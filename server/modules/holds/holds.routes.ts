@@ -6,6 +6,7 @@ import { AppError } from '../../lib/errors';
 import { requireUser } from '../../lib/session';
 import { matchedSetSchema } from '../../../shared/holds';
 import { listHolds, placeHold, placeMatchedSet, releaseHold } from './holds.service';
+import { getLogger } from '../../lib/logger';
 
 const parseId = (raw: string, what: string) => {
   const id = Number(raw);
@@ -22,7 +23,7 @@ export function holdRoutes({ db, holdHours, mailer, publicUrl, trustedOrigins }:
   const router = Router();
   const base = publicUrl ?? trustedOrigins?.[0] ?? '';
   // The background job would send them within seconds anyway; sending now saves the buyer the wait.
-  const sendMail = () => flushOutbox(db, mailer).catch((err) => console.warn('[holds] mail flush failed', (err as Error).message));
+  const sendMail = () => flushOutbox(db, mailer).catch((err) => getLogger().warn({ part: 'holds', reason: (err as Error).message }, 'sending queued e-mail failed'));
   router.post('/slabs/:id/hold', requireUser, async (req, res) => {
     const hold = await placeHold(db, req.user!, parseId(String(req.params.id), 'That slab'), { holdHours, publicUrl: base });
     await sendMail();

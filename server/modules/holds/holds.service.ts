@@ -1,5 +1,4 @@
 import { randomUUID } from 'node:crypto';
-import { areBookMatched } from '../../../shared/slabs';
 import type { Db, Tx } from '../../db/client';
 import { AppError, notFound } from '../../lib/errors';
 import { recordAudit } from '../../lib/audit';
@@ -15,6 +14,8 @@ import { readMillSettings } from '../pricing/pricing.repo';
 import { loadPricingRules } from '../pricing/pricing.service';
 import { isUniqueViolation } from './unique-violation';
 import { quoteSlab } from '../pricing/slab-quote';
+import { assertOneSet } from '../matched-sets/matched-sets.service';
+import { tellAboutRestOfSet } from './set-remainder';
 import * as repo from './holds.repo';
 
 export type HoldOptions = { holdHours?: number; now?: Date; publicUrl?: string };
@@ -78,16 +79,11 @@ export async function placeHold(db: Db, buyer: SessionUser, slabId: number, opts
   return hold;
 }
 
-/** A book-matched pair: same log, neighbouring sequence numbers, both for sale. */
+/** Slabs of one book-matched set as the yard marked it (at least two of its members), held together. */
 export async function placeMatchedSet(db: Db, buyer: SessionUser, slabIds: number[], opts: HoldOptions = {}) {
   const found = await repo.findLogNeighbours(db, slabIds);
   if (found.length !== slabIds.length) throw notFound('One of those slabs');
-  const [a, b] = found;
-  if (!areBookMatched(a, b)) {
-    throw new AppError(400, 'not_matched', 'Those slabs are not a book-matched pair: they must be neighbours from the same log.', {
-      slabIds: ['Pick two neighbouring slabs from the same log'],
-    });
-  }
+  await assertOneSet(db, slabIds);
   return holdSlabs(db, buyer, slabIds, opts);
 }
 
@@ -122,6 +118,7 @@ export async function releaseHold(db: Db, actor: SessionUser, holdId: number, { 
     if (hold.buyerId !== actor.id) {
       await recordAudit(tx, { actor, action: 'hold.release', entityType: 'hold', entityId: hold.id, before: { status: 'active' }, after: { status: 'released' } });
     }
+    await tellAboutRestOfSet(tx, [closed], hold.buyerId === actor.id ? 'released-by-buyer' : 'released-by-office', actor, { publicUrl });
     return closed;
   });
 }
@@ -135,6 +132,7 @@ export async function releaseExpiredHolds(db: Db, { now = new Date(), publicUrl 
     const closedIds = new Set(closed.map((h) => h.id));
     const done = expired.filter((e) => closedIds.has(e.hold.id));
     await repo.markSlabsListed(tx, done.map((e) => e.hold.slabId));
+    await tellAboutRestOfSet(tx, closed, 'expired', null, { publicUrl });
     await tellWatchersSlabsAreFree(tx, done.map((e) => e.hold.slabId), { publicUrl, now });
     const byBuyer = new Map<string, typeof done>();
     for (const e of done) byBuyer.set(e.buyerEmail, [...(byBuyer.get(e.buyerEmail) ?? []), e]);

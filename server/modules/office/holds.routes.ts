@@ -4,6 +4,7 @@ import { flushOutbox } from '../../lib/outbox';
 import { requireRole } from '../../lib/session';
 import { listActiveHolds, releaseHold } from './holds.service';
 import { parseRouteId } from './route-id';
+import { getLogger } from '../../lib/logger';
 
 export function officeHoldRoutes({ db, mailer, publicUrl, trustedOrigins }: AppDeps) {
   const router = Router();
@@ -14,7 +15,7 @@ export function officeHoldRoutes({ db, mailer, publicUrl, trustedOrigins }: AppD
   });
   router.delete('/office/holds/:id', admin, async (req, res) => {
     const result = await releaseHold(db, req.user!, parseRouteId(req.params.id as string, 'That hold'), { publicUrl: base });
-    await flushOutbox(db, mailer).catch((err) => console.warn('[office] mail flush failed', (err as Error).message));
+    await flushOutbox(db, mailer).catch((err) => getLogger().warn({ part: 'office', reason: (err as Error).message }, 'sending queued e-mail failed'));
     res.json(result);
   });
   return router;

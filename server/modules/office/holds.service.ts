@@ -3,6 +3,7 @@ import { AppError, notFound } from '../../lib/errors';
 import { recordAudit } from '../../lib/audit';
 import type { SessionUser } from '../../lib/session';
 import type { ActiveHold } from '../../../shared/office';
+import { tellAboutRestOfSet } from '../holds/set-remainder';
 import { tellWatchersSlabsAreFree } from '../buyer-lists/slab-watches';
 import * as repo from './holds.repo';
 
@@ -17,13 +18,14 @@ export async function releaseHold(db: Db, actor: SessionUser, id: number, { publ
     const hold = await repo.findHoldForUpdate(tx, id);
     if (!hold) throw notFound('That hold');
     if (hold.status !== 'active') throw new AppError(409, 'hold_not_active', `That hold is already ${hold.status}; nothing to release.`);
-    await repo.closeHold(tx, id, actor.id);
+    const closed = await repo.closeHold(tx, id, actor.id);
     const relisted = await repo.relistHeldSlab(tx, hold.slabId);
     if (relisted) await tellWatchersSlabsAreFree(tx, [hold.slabId], { publicUrl });
     await recordAudit(tx, {
       actor, action: 'hold.release', entityType: 'hold', entityId: id,
       before: { status: 'active', slabId: hold.slabId, buyerId: hold.buyerId }, after: { status: 'released', slabRelisted: relisted },
     });
+    if (closed) await tellAboutRestOfSet(tx, [closed], 'released-by-office', actor, { publicUrl });
     return { id, status: 'released' as const, slabRelisted: relisted };
   });
 }

@@ -3,6 +3,7 @@ import type { Db } from '../../db/client';
 import { requireRole } from '../../lib/session';
 import type { MillNumbers, SalesMoney } from '../../../shared/office';
 import { daysMilledToSold, refundsByMonthAndSpecies, salesByMonthAndSpecies, slabCountsByStatus } from './numbers.repo';
+import { listYardSlabs } from '../slabs/yard-inventory.service';
 
 const round2 = (n: number) => Math.round(n * 100) / 100;
 
@@ -16,7 +17,10 @@ function money(wood: number, services: number, tax: number, rWood: number, rServ
 
 /** The mill's numbers: sums come from the database; here they are only put side by side and added up. */
 export async function millNumbers(db: Db): Promise<MillNumbers> {
-  const [sales, refunds, statusCounts, days] = await Promise.all([salesByMonthAndSpecies(db), refundsByMonthAndSpecies(db), slabCountsByStatus(db), daysMilledToSold(db)]);
+  const [sales, refunds, statusCounts, days, drying] = await Promise.all([
+    salesByMonthAndSpecies(db), refundsByMonthAndSpecies(db), slabCountsByStatus(db), daysMilledToSold(db),
+    listYardSlabs(db, { status: 'drying', sort: 'airDryExpectedOn', dir: 'asc', pageSize: '200' }),
+  ]);
   const rows = sales.map((s) => {
     const r = refunds.find((x) => x.month === s.month && x.species_name === s.species_name);
     return {
@@ -31,6 +35,11 @@ export async function millNumbers(db: Db): Promise<MillNumbers> {
     statusCounts,
     averageDaysMilledToSold: days.avgDays === null ? null : Math.round(days.avgDays * 10) / 10,
     soldSlabsWithMillDate: days.n,
+    dryingStock: drying.items.map((r) => ({
+      id: r.id, code: r.code, speciesName: r.species.name, thicknessIn: r.thicknessIn, moisturePercent: r.moisturePercent,
+      expectedOn: r.airDry?.expectedOn ?? null, earliestOn: r.airDry?.earliestOn ?? null, latestOn: r.airDry?.latestOn ?? null,
+      basis: r.airDry?.basis ?? 'not-enough-data',
+    })),
   };
 }
 

@@ -10,6 +10,7 @@ import { formatCents } from '../../../shared/wood/index';
 import type { CreateRefundInput } from '../../../shared/office';
 import * as orders from './orders.repo';
 import * as repo from './refunds.repo';
+import { getLogger } from '../../lib/logger';
 import { getOrderDetail, toPaymentView } from './orders.service';
 import { recordRefundAllocation } from './refund-allocation';
 
@@ -105,5 +106,5 @@ export async function issueRefund(deps: RefundDeps, actor: SessionUser | null, o
 
 /** Sends the queued e-mail now; if the mail server is down the row stays queued for the next try. */
 export async function sendQueuedMail({ db, mailer }: { db: Db; mailer: Mailer }) {
-  await flushOutbox(db, mailer).catch((err) => console.warn('[office] mail flush failed', (err as Error).message));
+  await flushOutbox(db, mailer).catch((err) => getLogger().warn({ part: 'office', reason: (err as Error).message }, 'sending queued e-mail failed'));
 }

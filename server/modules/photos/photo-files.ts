@@ -2,6 +2,7 @@ import crypto from 'node:crypto';
 import fs from 'node:fs/promises';
 import path from 'node:path';
 import type { RenderedPhoto } from './photo-image';
+import { getLogger } from '../../lib/logger';
 
 /** 128 random bits in hex: unguessable and safe in a URL and a file name. */
 export const newFileKey = () => crypto.randomBytes(16).toString('hex');
@@ -36,5 +37,5 @@ export async function removeRenditions(dir: string, keys: string[]) {
     keys.flatMap((key) => renditionNames(key).map((name) => fs.rm(path.join(dir, name), { force: true }))),
   );
   // Cleanup runs while another error is on its way out: log, never replace that error.
-  for (const r of results) if (r.status === 'rejected') console.error('[photos] could not remove a rendition', r.reason);
+  for (const r of results) if (r.status === 'rejected') getLogger().error({ part: 'photos', err: r.reason }, 'could not remove a photo rendition');
 }

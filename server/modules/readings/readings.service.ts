@@ -10,6 +10,7 @@ import {
   type ReadingReview, type ReadingSaved, type ReadingView, type SlabReadings,
 } from '../../../shared/readings';
 import * as repo from './readings.repo';
+import { forecastAirDry } from '../slabs/drying-forecast';
 
 type Actor = Pick<SessionUser, 'id' | 'email'>;
 const round1 = (n: number) => Math.round(n * 10) / 10;
@@ -150,7 +151,9 @@ export async function listForSlab(db: Db, slabId: number): Promise<SlabReadings>
   if (!slab) throw notFound('That slab');
   const [rows, targetMcPercent] = await Promise.all([repo.listReadings(db, slabId), repo.readTargetMcPercent(db)]);
   const airDryReadyOn = slab.milledOn ? airDryReadyDate({ milledOn: slab.milledOn, thicknessIn: slab.thicknessIn }).toISOString().slice(0, 10) : null;
-  return { slab, items: rows.map(toView), targetMcPercent, airDryReadyOn };
+  const vouched = rows.filter((r) => r.review !== 'unconfirmed');
+  const dryingForecast = forecastAirDry({ readings: vouched, thicknessIn: slab.thicknessIn, milledOn: slab.milledOn });
+  return { slab, items: rows.map(toView), targetMcPercent, airDryReadyOn, dryingForecast };
 }
 
 export async function removeReading(db: Db, actor: Actor, id: number) {

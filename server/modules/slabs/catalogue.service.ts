@@ -5,6 +5,7 @@ import { photoUrls } from '../../../shared/photos';
 import { airDryReadyDate, lifting, roundBoardFeet } from '../../../shared/wood/index';
 import { quoteSlab } from '../pricing/slab-quote';
 import { slabPartOf, soldLineOf } from '../pricing/sold-price';
+import { setOfSlab } from '../matched-sets/matched-sets.service';
 import { loadPricingRules } from '../pricing/pricing.service';
 import { readMillSettings } from '../pricing/pricing.repo';
 import * as repo from './catalogue.repo';
@@ -45,10 +46,11 @@ export async function getSlabDetail(db: Tx, id: number, { includeHidden = false 
   if (!found || (!includeHidden && !PUBLIC_STATUSES.includes(found.slab.status as SlabStatus))) throw notFound('That slab');
   const { slab, species, log } = found;
   const sold = isSold(slab.status);
-  const [photos, readings, sequence, rules, settings, soldLine] = await Promise.all([
+  const [photos, readings, sequence, rules, settings, soldLine, matchedSet] = await Promise.all([
     repo.findPhotos(db, id), repo.findReadings(db, id), repo.findLogSequence(db, log.id),
-    loadPricingRules(db), readMillSettings(db), sold ? soldLineOf(db, id) : null,
+    loadPricingRules(db), readMillSettings(db), sold ? soldLineOf(db, id) : null, setOfSlab(db, id),
   ]);
+  const visible = (status: string) => includeHidden || PUBLIC_STATUSES.includes(status as SlabStatus);
   const latest = readings.at(-1) ?? null;
   const quote = quoteSlab(slab, species, latest?.mcPercent ?? null, rules);
   // A sold slab shows what it sold at (its order line), never a price worked out from today's rules.
@@ -77,6 +79,7 @@ export async function getSlabDetail(db: Tx, id: number, { includeHidden = false 
       .filter((n) => includeHidden || PUBLIC_STATUSES.includes(n.status as SlabStatus))
       .map((n) => ({ ...n, status: n.status as SlabStatus, coverThumbUrl: thumb(n.coverKey), isThisSlab: n.id === slab.id, coverKey: undefined })),
     priceBreakdown: price.priceBreakdown,
+    matchedSet: matchedSet && { ...matchedSet, slabs: matchedSet.slabs.filter((m) => visible(m.status)) },
     weightLb: Math.round(quote.weightLb),
     weightAtMcPercent: quote.mcPercent,
     weightBasis: quote.weighing.basis,

@@ -53,11 +53,11 @@ const sortColumn: Record<YardSort, SQL> = {
   airDryExpectedOn: sql`${slabs.code}`,
 };
 
-/** Every reading of the given slabs, oldest first, for the drying forecasts. */
+/** The readings someone stands behind (not unconfirmed ones) of the given slabs, oldest first, for the drying forecasts. */
 export function readingsForSlabs(db: Tx, ids: number[]) {
   if (!ids.length) return Promise.resolve([]);
   return db.select({ slabId: moistureReadings.slabId, measuredOn: moistureReadings.measuredOn, mcPercent: moistureReadings.mcPercent })
-    .from(moistureReadings).where(inArray(moistureReadings.slabId, ids)).orderBy(asc(moistureReadings.measuredOn), asc(moistureReadings.id));
+    .from(moistureReadings).where(and(inArray(moistureReadings.slabId, ids), vouchedFor)).orderBy(asc(moistureReadings.measuredOn), asc(moistureReadings.id));
 }
 
 export async function findYardPage(db: Tx, q: YardSlabQuery, { all = false } = {}) {

@@ -36,7 +36,7 @@ export function useHoldSlab() {
 export function useHoldPair() {
   const invalidate = useInvalidateAfterHold();
   return useMutation({
-    mutationFn: (slabIds: [number, number]) => apiFetch<{ holds: Created[] }>('/api/holds/matched-set', { method: 'POST', body: { slabIds } }),
+    mutationFn: (slabIds: number[]) => apiFetch<{ holds: Created[] }>('/api/holds/matched-set', { method: 'POST', body: { slabIds } }),
     onSuccess: invalidate,
   });
 }

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { redirect } from 'react-router';
-import { apiFetch, ApiError } from '../../lib/api-client';
+import { apiFetch, ApiError, requestIdOf } from '../../lib/api-client';
 import { paths } from '../../paths';
 import type { ChangeEmailInput, ChangePasswordInput, ForgotPasswordInput, SignInInput, SignUpInput, UpdateNameInput } from '../../../shared/accounts';
 import type { Preferences, PreferencesInput } from '../../../shared/preferences';
@@ -14,14 +14,8 @@ export const sessionKeys = { me: ['session', 'me'] as const };
 export const meQuery = () =>
   queryOptions({
     queryKey: sessionKeys.me,
-    queryFn: async (): Promise<Me | null> => {
-      try {
-        return (await apiFetch<{ user: Me }>('/api/me')).user;
-      } catch (e) {
-        if (e instanceof ApiError && e.status === 401) return null;
-        throw e;
-      }
-    },
+    // Visitors get { user: null } (not a 401), so a signed-out page load logs no error in the console.
+    queryFn: async (): Promise<Me | null> => (await apiFetch<{ user: Me | null }>('/api/me')).user,
     staleTime: 60_000,
   });
 
@@ -60,7 +54,7 @@ async function authPost<T = unknown>(path: string, body: object): Promise<T> {
   const data = await res.json().catch(() => null);
   if (!res.ok) {
     const ours = data?.error;
-    throw new ApiError(res.status, ours?.code ?? data?.code ?? 'error', ours?.message ?? data?.message ?? res.statusText, ours?.fieldErrors ?? {});
+    throw new ApiError(res.status, ours?.code ?? data?.code ?? 'error', ours?.message ?? data?.message ?? res.statusText, ours?.fieldErrors ?? {}, requestIdOf(res));
   }
   return data as T;
 }

@@ -1,5 +1,6 @@
 import { keepPreviousData, queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '../../lib/api-client';
+import type { LogMatchedSets, MatchedSetView } from '../../../shared/matched-sets';
 import type { CreateLogInput, LogDetail, LogSummary, UpdateLog } from '../../../shared/logs';
 import type {
   BulkResult, BulkSlabAction, CreateFigureKind, CreateSlab, FigureKind, UpdateSlab, YardSlabDetail, YardSlabPage,
@@ -18,7 +19,21 @@ export const yardKeys = {
   figureKinds: () => [...yardKeys.all, 'figure-kinds'] as const,
   species: () => [...yardKeys.all, 'species'] as const,
   shopAddress: () => [...yardKeys.all, 'shop-address'] as const,
+  matchedSets: (logId: number) => [...yardKeys.all, 'logs', logId, 'matched-sets'] as const,
 };
+
+export const logMatchedSetsQuery = (logId: number) =>
+  queryOptions({ queryKey: yardKeys.matchedSets(logId), queryFn: () => apiFetch<LogMatchedSets>(`/api/logs/${logId}/matched-sets`) });
+
+/** Marking or unmarking a set changes the log page and every public slab page of the log. */
+export function useMatchedSetChange(logId: number) {
+  const qc = useQueryClient();
+  const refresh = () => { void qc.invalidateQueries({ queryKey: yardKeys.matchedSets(logId) }); void qc.invalidateQueries({ queryKey: ['slabs'] }); };
+  return {
+    mark: useMutation({ mutationFn: (slabIds: number[]) => apiFetch<MatchedSetView>('/api/matched-sets', { method: 'POST', body: { slabIds } }), onSuccess: refresh }),
+    unmark: useMutation({ mutationFn: (setId: number) => apiFetch<{ id: number }>(`/api/matched-sets/${setId}`, { method: 'DELETE' }), onSuccess: refresh }),
+  };
+}
 
 export type ShopAddress = { url: string; phonesCanReach: boolean; suggestions: string[] };
 

@@ -16,8 +16,6 @@ const STAFF: Role[] = ['seller', 'admin'];
 const ADMIN: Role[] = ['admin'];
 
 const MATRIX: Row[] = [
-  // accounts
-  ['get', '/api/me', 'signed-in'],
   // buyer side: holds, checkout, orders, pickups
   ['post', `/api/slabs/${NONE}/hold`, 'signed-in'],
   ['post', '/api/holds/matched-set', 'signed-in'],

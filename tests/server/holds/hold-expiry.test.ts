@@ -45,7 +45,7 @@ describe('expired holds', () => {
 
   it('a failed send is kept and retried later, not lost', async () => {
     await t.db.insert(emailOutbox).values({ toAddress: 'nobody@example.test', subject: 's', html: '<p>h</p>', text: 't', kind: 'test' });
-    const broken = { send: async () => { throw new Error('SMTP down'); }, close: () => undefined };
+    const broken = { send: async () => { throw new Error('SMTP down'); }, verify: async () => { throw new Error('SMTP down'); }, close: () => undefined };
     const result = await flushOutbox(t.db, broken);
     expect(result.failed).toBeGreaterThanOrEqual(1);
     const [row] = await t.db.select().from(emailOutbox).where(eq(emailOutbox.toAddress, 'nobody@example.test'));

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { createTestApp, TEST_ORIGIN, type TestApp } from '../../helpers/test-app';
-import { logRow, slabRow } from '../../helpers/fixtures';
+import { logRow, matchedSetRow, slabRow } from '../../helpers/fixtures';
 import { holds, slabs } from '../../../server/db/schema/index';
 import { hold, millSettingsRow } from '../checkout/checkout-fixtures';
 
@@ -83,9 +83,10 @@ describe('a buyer’s holds', () => {
 });
 
 describe('a book-matched pair', () => {
-  it('holds two neighbouring slabs from one log together, under one group', async () => {
+  it('holds two slabs the yard marked as a pair together, under one group', async () => {
     const log = await logRow(t.db, 'black-walnut');
     const [a, b] = [await slabRow(t.db, log), await slabRow(t.db, log)];
+    await matchedSetRow(t.db, [a, b]);
     const { agent } = await t.signedInAs('buyer');
     const res = await agent.post('/api/holds/matched-set').set('Origin', TEST_ORIGIN).send({ slabIds: [a.id, b.id] });
     expect(res.status).toBe(201);
@@ -97,6 +98,7 @@ describe('a book-matched pair', () => {
   it('holds neither slab when one of the pair is already held (all or nothing)', async () => {
     const log = await logRow(t.db, 'black-walnut');
     const [a, b] = [await slabRow(t.db, log), await slabRow(t.db, log)];
+    await matchedSetRow(t.db, [a, b]);
     const first = await t.signedInAs('buyer');
     await hold(first.agent, b.id);
     const { agent } = await t.signedInAs('buyer');
@@ -106,14 +108,15 @@ describe('a book-matched pair', () => {
     expect(await t.db.select().from(holds).where(eq(holds.slabId, a.id))).toHaveLength(0);
   });
 
-  it('refuses slabs that are not neighbours from the same log with 400', async () => {
+  it('refuses slabs the yard has not marked as one set with 400 — even neighbours from the same log', async () => {
     const log = await logRow(t.db, 'black-walnut');
     const a = await slabRow(t.db, log);
-    await slabRow(t.db, log);
-    const c = await slabRow(t.db, log);
+    const b = await slabRow(t.db, log);
     const elsewhere = await slabRow(t.db, await logRow(t.db, 'black-walnut'));
     const { agent } = await t.signedInAs('buyer');
-    expect((await agent.post('/api/holds/matched-set').set('Origin', TEST_ORIGIN).send({ slabIds: [a.id, c.id] })).status).toBe(400);
+    const neighbours = await agent.post('/api/holds/matched-set').set('Origin', TEST_ORIGIN).send({ slabIds: [a.id, b.id] });
+    expect(neighbours.status).toBe(400);
+    expect(neighbours.body.error.code).toBe('not_matched');
     expect((await agent.post('/api/holds/matched-set').set('Origin', TEST_ORIGIN).send({ slabIds: [a.id, elsewhere.id] })).status).toBe(400);
     expect(await slabStatus(a.id)).toBe('listed');
   });

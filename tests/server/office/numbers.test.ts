@@ -51,4 +51,20 @@ describe('GET /api/office/numbers', () => {
     expect(res.body.averageDaysMilledToSold).toBe(117.7);
     expect(res.body.soldSlabsWithMillDate).toBe(3);
   });
+
+  it('lists drying stock with its expected air-dry date and range, soonest first', async () => {
+    const admin = await t.signedInAs('admin');
+    // Milled 2024-03-01, no readings: one year per inch (common practice) → 1 in: 2025-03-01 (range 2024-09-01 – 2025-09-01);
+    // 2 in: 2026-03-01. The drying slab from the first test has one reading today (9 %): already air-dry.
+    const log = await logRow(t.db, 'sugar-maple', { milledOn: '2024-03-01' });
+    const thick = await slabRow(t.db, log, { status: 'drying', thicknessIn: 2, mc: null });
+    const thin = await slabRow(t.db, log, { status: 'drying', thicknessIn: 1, mc: null });
+    const res = await admin.agent.get('/api/office/numbers');
+    const stock = res.body.dryingStock as Array<{ id: number; expectedOn: string; earliestOn: string; latestOn: string; basis: string }>;
+    const mine = stock.filter((d) => d.id === thick.id || d.id === thin.id);
+    expect(mine.map((d) => d.id)).toEqual([thin.id, thick.id]);
+    expect(mine[0]).toMatchObject({ expectedOn: '2025-03-01', earliestOn: '2024-09-01', latestOn: '2025-09-01', basis: 'rule-of-thumb' });
+    const dates = stock.map((d) => d.expectedOn).filter(Boolean);
+    expect(dates).toEqual([...dates].sort());
+  });
 });

@@ -26,7 +26,7 @@ describe('seedDemo', () => {
     await migrateDatabase(database);
     auth = createAuth({
       db: database.db, secret: 'x'.repeat(32), baseURL: 'http://localhost:3000',
-      mailer: { send: async () => {}, close() {} },
+      mailer: { send: async () => {}, verify: async () => {}, close() {} },
     });
     uploadsDir = join(mkdtempSync(join(tmpdir(), 'stickerline-seed-')), 'uploads');
     first = await seedDemo({ db: database.db, auth, uploadsDir, log: (m) => messages.push(m) });

@@ -64,7 +64,7 @@ describe('equilibriumMoistureContent (Wood Handbook Eq. 4-5)', () => {
 
 describe('moistureContentPercent (ASTM D4442, oven-dry basis)', () => {
   it('reads 1,100 g wet over 1,000 g oven-dry as 10.0 %', () => {
-    // ASTM D4442 oven-dry formula, REFERENCES example (read), tolerance 1e-9
+    // ASTM D4442 oven-dry formula: (1100 − 1000) / 1000 × 100 = 10 %, tolerance 1e-9
     expect(moistureContentPercent({ wetMass: 1100, ovenDryMass: 1000 })).toBeCloseTo(10, 9);
   });
 

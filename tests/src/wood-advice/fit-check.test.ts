@@ -4,8 +4,8 @@ import { dimensionalChangeIn, equilibriumMoistureContent } from '../../../shared
 
 describe('fit check wording', () => {
   it('states a shrink to the nearest 1/16 in, in plain words', () => {
-    // Worked example (REFERENCES, from Wood Handbook FPL-GTR-190 Table 13-5, C_T = 0.00274):
-    // 12 in flatsawn black walnut from 12 % to 6 % MC → −0.197 in ≈ 3/16 in narrower.
+    // 12 in flatsawn black walnut from 12 % to 6 % MC: Wood Handbook FPL-GTR-190 Table 4-3 (T 7.8 %) with FPL-GTR-282 Eq. 4-9
+    // gives −0.196 in; Table 13-5 (C_T 0.00274) gives 12 × 0.00274 × (−6) = −0.197 in. Either way ≈ 3/16 in narrower.
     const change = dimensionalChangeIn({ dimensionIn: 12, speciesSlug: 'black-walnut', grain: 'flatsawn', fromMcPercent: 12, toMcPercent: 6 });
     expect(describeChange(change)).toBe('about 3/16 in narrower');
   });
@@ -16,7 +16,7 @@ describe('fit check wording', () => {
   });
 
   it('a heated winter house (68 °F, 30 % RH) dries wood to about 6 % MC', () => {
-    // Wood Handbook Table 4-2 gives 5.9–6.2 % around 70 °F / 30 % RH (quoted in REFERENCES as the EMC table; ±0.5 here, from memory for this cell).
+    // Wood Handbook FPL-GTR-190 Table 4-2 gives about 6 % around 70 °F / 30 % RH (from memory for this cell; ±0.6 here).
     expect(equilibriumMoistureContent({ temperatureF: 68, relativeHumidityPercent: 30 })).toBeGreaterThan(5.4);
     expect(equilibriumMoistureContent({ temperatureF: 68, relativeHumidityPercent: 30 })).toBeLessThan(6.7);
   });

@@ -1,20 +1,21 @@
 import { Link } from 'react-router';
 import type { LogNeighbour } from '../../../../shared/slabs';
-import { areBookMatched, isSold, priceWords, STATUS_LABELS } from '../../../../shared/slabs';
+import type { MatchedSetView } from '../../../../shared/matched-sets';
+import { isSold, priceWords, STATUS_LABELS } from '../../../../shared/slabs';
 import { formatCents } from '../../../../shared/wood/index';
 import { Length } from '../../../lib/units';
 import { paths } from '../../../paths';
 
 /**
- * The slabs cut from the same log, in sawing order. Neighbours next to each other have
- * mirror-image faces (book-matched) and can be paired for a table top.
+ * The slabs cut from the same log, in sawing order. The ones the yard marked as this slab's
+ * book-matched set (mirror-image faces, for a table top) are labelled.
  */
-export function LogSequence({ logId, neighbours }: { logId: number; neighbours: LogNeighbour[] }) {
-  const me = neighbours.find((n) => n.isThisSlab);
+export function LogSequence({ neighbours, matchedSet }: { neighbours: LogNeighbour[]; matchedSet: MatchedSetView | null }) {
+  const inSet = new Set((matchedSet?.slabs ?? []).map((m) => m.id));
   return (
     <ol className="flex gap-2 overflow-x-auto pb-2" aria-label="Slabs from this log in sawing order">
       {neighbours.map((n) => {
-        const partner = !!me && areBookMatched({ logId, sequenceInLog: me.sequenceInLog }, { logId, sequenceInLog: n.sequenceInLog });
+        const partner = inSet.has(n.id);
         return (
           <li key={n.id} className={`w-36 shrink-0 rounded-md border p-2 text-sm ${n.isThisSlab ? 'border-accent bg-accent-soft' : 'border-line bg-surface-raised'}`}>
             {n.isThisSlab ? (

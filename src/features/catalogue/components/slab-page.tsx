@@ -7,12 +7,28 @@ import { PriceBreakdown } from './price-breakdown';
 import { LogSequence } from './log-sequence';
 import { WeightCaution } from './weight-caution';
 import { MeasurementsTable } from './measurements-table';
+import { SafetyNotice } from '../../../components/safety-caution';
+import { FINISHING_CAUTION } from '../../../../shared/safety';
 import { DryingForecastNote } from '../../../components/wood/drying-forecast';
 import { PageTitle } from '../../../components/ui/page-title';
 import { Tag } from '../../../components/ui/tag';
 import { paths } from '../../../paths';
-import { isSold, priceWords, STATUS_LABELS, SAWING_METHOD_LABELS } from '../../../../shared/slabs';
+import { isSold, priceWords, STATUS_LABELS, SAWING_METHOD_LABELS, type SlabDetail } from '../../../../shared/slabs';
+import { setWords } from '../../../../shared/matched-sets';
 import { DRYING_STATES, formatCents } from '../../../../shared/wood/index';
+
+/** The one sentence about book-matching, written from the set the yard marked (never from the log order). */
+function MatchedSetNote({ slab }: { slab: SlabDetail }) {
+  const others = (slab.matchedSet?.slabs ?? []).filter((m) => m.id !== slab.id);
+  if (!others.length) return null;
+  return (
+    <p className="border-l-2 border-accent pl-2 text-accent-strong">
+      Book-matched with {others.map((m, i) => (
+        <span key={m.id}>{i > 0 && (i === others.length - 1 ? ' and ' : ', ')}<Link to={paths.slab(m.id)} className="underline">{m.code}</Link></span>
+      ))}: sawn in a row from log {slab.log.code}, so the faces mirror each other — the yard marked them as a {setWords(others.length + 1)}.
+    </p>
+  );
+}
 
 const MoistureChart = lazy(() => import('./moisture-chart'));
 
@@ -32,6 +48,7 @@ export function SlabPage({ slots = {} }: { slots?: SlabPageSlots }) {
         <div className="flex flex-col gap-4">
           <PhotoGallery photos={slab.photos} code={slab.code} />
           {slab.description && <p>{slab.description}</p>}
+          <MatchedSetNote slab={slab} />
         </div>
         <div className="flex flex-col gap-4">
           <div>
@@ -55,6 +72,9 @@ export function SlabPage({ slots = {} }: { slots?: SlabPageSlots }) {
         <div>
           <h2 id="measures" className="mb-2 text-xl font-bold">Measurements</h2>
           <MeasurementsTable slab={slab} />
+          {slab.defects.some((d) => /epoxy|resin|fill|finish|oil/i.test(d.note)) && (
+            <div className="mt-2"><SafetyNotice caution={FINISHING_CAUTION} /></div>
+          )}
         </div>
         <div>
           <h2 className="mb-2 text-xl font-bold">Drying history</h2>
@@ -81,7 +101,7 @@ export function SlabPage({ slots = {} }: { slots?: SlabPageSlots }) {
           {SAWING_METHOD_LABELS[slab.log.sawingMethod as keyof typeof SAWING_METHOD_LABELS] ?? slab.log.sawingMethod}
           {slab.log.felledOn && ` · felled ${slab.log.felledOn}`}{slab.log.milledOn && ` · milled ${slab.log.milledOn}`}. {slab.log.originNote}
         </p>
-        <LogSequence logId={slab.log.id} neighbours={slab.neighbours} />
+        <LogSequence neighbours={slab.neighbours} matchedSet={slab.matchedSet} />
       </section>
     </article>
   );

@@ -17,7 +17,7 @@ export function LoadingAdvicePanel({ advice, loadingHelp }: { advice: LoadingAdv
         {advice.bring.map((b) => <li key={b}>{b}</li>)}
       </ul>
       {loadingHelp
-        ? <p>The yard crew will help you load{advice.needsEquipment ? ' with the forklift' : ''}.</p>
+        ? <p>The yard crew will help you load{advice.needsEquipment ? ' with the slab cart or forklift, run by trained operators only; please stand clear of a raised load' : ''}.</p>
         : advice.millHelpRecommended && <Notice tone="caution">We recommend asking for the mill's loading help for this order.</Notice>}
       <Notice tone="caution" title="Lifting and loading">
         <p>{advice.liftingMessage}</p>

@@ -29,6 +29,8 @@ export function HoldsPage() {
             <span>
               <Link to={paths.slab(h.slabId)} className="font-semibold text-accent underline">{h.slabCode}</Link>{' '}
               for {h.buyerName} ({h.buyerEmail}) · until {new Date(h.expiresAt).toLocaleString()} · {left(h.expiresAt)}
+              {h.groupId && <> · <span className="font-semibold">part of a matched set held together</span>{' '}
+                ({data.items.filter((o) => o.groupId === h.groupId).map((o) => o.slabCode).join(', ')})</>}
             </span>
             <Button variant="secondary" onClick={() => setTarget(h)}>Let go</Button>
           </li>
@@ -38,6 +40,10 @@ export function HoldsPage() {
       <ConfirmDialog open={target !== null} busy={release.isPending} title={`Let go of the hold on ${target?.slabCode ?? ''}?`} confirmLabel="Put it back on sale"
         onCancel={() => setTarget(null)} onConfirm={() => target && release.mutate(target.id, { onSettled: () => setTarget(null) })}>
         <p>{target?.buyerName} loses the hold and the slab is on sale to everyone again.</p>
+        {target?.groupId && (
+          <p>This slab was reserved as part of a book-matched set. The rest of the set stays held for {target.buyerName} until its own time runs out,
+            and they are e-mailed which slabs still wait for them.</p>
+        )}
       </ConfirmDialog>
     </div>
   );

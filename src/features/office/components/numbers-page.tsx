@@ -53,7 +53,42 @@ export function NumbersPage() {
         </BarChart>
       </ChartBox>
       <NumbersTables data={data} />
+      <DryingStockTable data={data} />
     </div>
+  );
+}
+
+const BASIS_WORDS: Record<string, string> = {
+  'fitted-curve': 'fitted to its readings', 'rule-of-thumb': 'rule of thumb (a year per inch)', 'already-reached': 'already air-dry',
+  'not-reachable': 'not by air drying', 'not-enough-data': 'not enough data',
+};
+
+/** Drying stock with the date each slab should reach the air-dry line, soonest first. */
+function DryingStockTable({ data }: { data: MillNumbers }) {
+  return (
+    <section aria-labelledby="drying-stock-h" className="flex flex-col gap-2">
+      <h2 id="drying-stock-h" className="font-display text-lg font-bold">Drying stock: when it should be air-dry (20 %)</h2>
+      <p className="text-sm text-ink-soft">
+        Each date comes from the slab's own moisture readings (an exponential approach to the yard's equilibrium moisture, fitted once
+        there are three readings), otherwise from the rule of thumb of about a year per inch of thickness (common practice). The range is
+        the likely spread.
+      </p>
+      {data.dryingStock.length === 0 ? <p>No slabs are drying.</p> : (
+        <table className="w-full max-w-3xl text-left text-sm">
+          <caption className="sr-only">Drying stock, soonest expected air-dry date first</caption>
+          <thead><tr className="border-b border-line"><th scope="col">Slab</th><th scope="col">Species</th><th scope="col">Latest MC</th><th scope="col">Expected</th><th scope="col">Range</th><th scope="col">From</th></tr></thead>
+          <tbody>
+            {data.dryingStock.map((d) => (
+              <tr key={d.id} className="border-b border-line/60">
+                <td>{d.code}</td><td>{d.speciesName}</td><td>{d.moisturePercent === null ? '—' : `${d.moisturePercent} %`}</td>
+                <td>{d.expectedOn ?? '—'}</td><td>{d.earliestOn && d.latestOn && d.earliestOn !== d.latestOn ? `${d.earliestOn} – ${d.latestOn}` : '—'}</td>
+                <td>{BASIS_WORDS[d.basis] ?? d.basis}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+    </section>
   );
 }
 

@@ -7,6 +7,7 @@ import { buttonClass } from '../../../components/ui/button';
 import { paths } from '../../../paths';
 import { lifting, WOOD_LIMITS } from '../../../../shared/wood/index';
 import { Length, Weight } from '../../../lib/units';
+import { STAFF_DUST_NOISE_CAUTION } from '../../../../shared/safety';
 import { formatWindow, WEEKDAY_NAMES } from '../../../../shared/pickups';
 import type { PickupOrder, PickupBoard } from '../../../../shared/office';
 import { pickupsQuery } from '../api';
@@ -32,6 +33,9 @@ export function PickupBoardPage() {
         Slabs are heavy and awkward. {lifting({ weightLb: 1 }).basis} Anything heavier than two people should carry goes on a slab cart,
         or is lifted with the forklift or hoist by a trained operator only (certified where local rules require it); keep buyers clear of a raised load.
         Follow your local workplace rules and licensed practice.
+      </Notice>
+      <Notice tone="caution" title={STAFF_DUST_NOISE_CAUTION.title}>
+        Orders marked for flattening are flattened at the mill before pickup. {STAFF_DUST_NOISE_CAUTION.text}
       </Notice>
       {board.dates.map((d) => <DaySection key={d.date} day={d} board={board} />)}
     </div>

@@ -10,12 +10,12 @@ type Props = {
   slabId: number;
   slabCode: string;
   status: string;
-  /** A listed neighbour from the same log, offered as a book-matched pair. */
-  matchedNeighbour?: { id: number; code: string } | null;
+  /** The other slabs of the book-matched set the yard marked, still for sale: offered together with this one. */
+  setPartners?: { id: number; code: string }[];
 };
 
-/** Reserve (hold) this slab, or it and its book-matched neighbour together. */
-export function ReserveButton({ slabId, slabCode, status, matchedNeighbour }: Props) {
+/** Reserve (hold) this slab, or it and the rest of its book-matched set together. */
+export function ReserveButton({ slabId, slabCode, status, setPartners = [] }: Props) {
   const navigate = useNavigate();
   const location = useLocation();
   const single = useHoldSlab();
@@ -28,8 +28,10 @@ export function ReserveButton({ slabId, slabCode, status, matchedNeighbour }: Pr
     if (err instanceof ApiError && err.status === 401) navigate(paths.signIn(location.pathname));
   };
   const reserveOne = () => single.mutate(slabId, { onSuccess: () => setDone(`Slab ${slabCode} is held for you.`), onError });
-  const reservePair = () => matchedNeighbour && pair.mutate([slabId, matchedNeighbour.id], {
-    onSuccess: () => setDone(`Slabs ${slabCode} and ${matchedNeighbour.code} are held for you as a matched pair.`), onError,
+  const partnerCodes = setPartners.map((p) => p.code).join(' and ');
+  const setName = setPartners.length === 1 ? 'matched pair' : 'matched set';
+  const reservePair = () => pair.mutate([slabId, ...setPartners.map((p) => p.id)], {
+    onSuccess: () => setDone(`Slabs ${slabCode} and ${partnerCodes} are held for you as a ${setName}.`), onError,
   });
 
   if (done) {
@@ -46,9 +48,9 @@ export function ReserveButton({ slabId, slabCode, status, matchedNeighbour }: Pr
     <div className="flex flex-col gap-2">
       <div className="flex flex-wrap gap-2">
         <Button onClick={reserveOne} disabled={busy}>{single.isPending ? 'Reserving…' : 'Reserve this slab'}</Button>
-        {matchedNeighbour && (
+        {setPartners.length > 0 && (
           <Button variant="secondary" onClick={reservePair} disabled={busy}>
-            {pair.isPending ? 'Reserving…' : `Reserve both as a matched pair (with ${matchedNeighbour.code})`}
+            {pair.isPending ? 'Reserving…' : `Reserve ${setPartners.length === 1 ? 'both' : `all ${setPartners.length + 1}`} as a ${setName} (with ${partnerCodes})`}
           </Button>
         )}
       </div>

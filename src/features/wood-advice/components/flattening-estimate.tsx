@@ -4,6 +4,8 @@ import { InchesField } from '../../../components/ui/inches-field';
 import { useMeasures } from '../../../lib/units';
 import { plainWoodError } from '../../../lib/wood-words';
 import { Notice } from '../../../components/ui/notice';
+import { SafetyNotice } from '../../../components/safety-caution';
+import { FINISHING_CAUTION } from '../../../../shared/safety';
 
 type Props = { thicknessIn: number; widthIn: number; lengthIn: number; flatteningPriceCents: number };
 
@@ -17,9 +19,11 @@ export function FlatteningEstimatePanel({ thicknessIn, widthIn, lengthIn, flatte
     const e = flatteningEstimate({ thicknessIn, widthIn, lengthIn, deviationIn: parseInches(deviation) });
     text = e.feasible ? (
       <p>
-        About {m.length(e.removedPerFaceIn.first)} off the first face and {m.length(e.removedPerFaceIn.second)} off the second,
-        in {e.passes} router passes; finished thickness about <strong>{m.length(e.finishedThicknessIn)}</strong>.
-        The service costs {formatCents(flatteningPriceCents)} for this slab ({m.area(e.faceAreaSqFt)} face).
+        {e.passesPerFace.first} passes of {m.length(e.passDepthIn)} take {m.length(e.removedPerFaceIn.first)} off the first face and{' '}
+        {e.passesPerFace.second} more take {m.length(e.removedPerFaceIn.second)} off the second ({e.passes} router passes in all);
+        finished thickness about <strong>{m.length(e.finishedThicknessIn)}</strong>.
+        The service flattens both faces and costs {formatCents(flatteningPriceCents)} for this slab, charged on the area of one face
+        ({m.area(e.faceAreaSqFt)}).
       </p>
     ) : (
       <Notice tone="caution">{e.reason}</Notice>
@@ -37,9 +41,10 @@ export function FlatteningEstimatePanel({ thicknessIn, widthIn, lengthIn, flatte
       <div className="mt-3">
         <Notice tone="caution" title="Wood dust is a health hazard">
           Flattening and sanding make fine dust; wood dust is classed as a human carcinogen (IARC Monograph vol. 62). If you do this yourself,
-          use dust collection and a fitted respirator, and follow your local workplace rules.
+          use dust collection and a fitted respirator, and follow your local workplace rules and licensed practice.
         </Notice>
       </div>
+      <div className="mt-3"><SafetyNotice caution={FINISHING_CAUTION} /></div>
     </section>
   );
 }

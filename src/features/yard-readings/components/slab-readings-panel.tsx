@@ -6,6 +6,7 @@ import { Tag } from '../../../components/ui/tag';
 import { friendlyMessage } from '../../../lib/api-client';
 import { METER_KIND_LABELS } from '../../../../shared/readings';
 import { slabReadingsQuery, useDeleteReading } from '../api';
+import { DryingForecastNote } from '../../../components/wood/drying-forecast';
 import { DryingCurve } from './drying-curve';
 import { ReadingForm } from './reading-form';
 import { dryingLabel } from './drying-words';
@@ -18,7 +19,7 @@ export function SlabReadingsPanel({ slabId }: { slabId: number }) {
 
   if (q.isPending) return <p className="text-ink-soft">Loading readings…</p>;
   if (q.isError) return <Notice tone="danger" role="alert">{friendlyMessage(q.error)}</Notice>;
-  const { items, targetMcPercent, airDryReadyOn, slab } = q.data;
+  const { items, targetMcPercent, airDryReadyOn, slab, dryingForecast } = q.data;
   const newestFirst = [...items].reverse();
 
   return (
@@ -29,6 +30,7 @@ export function SlabReadingsPanel({ slabId }: { slabId: number }) {
         <span className="text-sm text-ink-soft">mill target {targetMcPercent} %</span>
       </div>
       <DryingCurve readings={items.filter((r) => r.review !== 'unconfirmed')} targetMcPercent={targetMcPercent} airDryReadyOn={airDryReadyOn} />
+      <DryingForecastNote forecast={dryingForecast} heading="Air-dry forecast" />
       <ReadingForm slabId={slabId} />
       {remove.isError && <Notice tone="danger" role="alert">{friendlyMessage(remove.error)}</Notice>}
       {newestFirst.length > 0 && (

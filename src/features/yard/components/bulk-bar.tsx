@@ -4,6 +4,8 @@ import type { BulkResult } from '../../../../shared/slab-input';
 import { Button, buttonClass } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
+import { SafetyNotice } from '../../../components/safety-caution';
+import { MOVE_TO_STACK_CAUTION } from '../../../../shared/safety';
 import { friendlyMessage } from '../../../lib/api-client';
 import { paths } from '../../../paths';
 import { useBulkAction } from '../api';
@@ -39,6 +41,7 @@ export function BulkBar({ selected, onDone }: Props) {
           ? <Link className={buttonClass('quiet')} to={paths.yardLabels(ids)}>Print labels</Link>
           : <span className="px-4 text-ink-soft">Print labels</span>}
       </div>
+      {(ids.length > 0 || stack.trim() !== '') && <SafetyNotice caution={MOVE_TO_STACK_CAUTION} />}
       {error && <Notice tone="danger" role="alert">{error}</Notice>}
       {results && (
         <Notice tone={failed.length ? 'caution' : 'success'} role="status" title={`${results.length - failed.length} of ${results.length} saved`}>

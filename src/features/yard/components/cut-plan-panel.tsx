@@ -5,6 +5,8 @@ import { useMeasures } from '../../../lib/units';
 import { plainWoodError } from '../../../lib/wood-words';
 import { SelectField } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
+import { SafetyNotice } from '../../../components/safety-caution';
+import { SAWING_CAUTION } from '../../../../shared/safety';
 import type { LogDetail } from '../../../../shared/logs';
 
 type Measure = 'top' | 'middle' | 'butt';
@@ -72,9 +74,7 @@ export function CutPlanPanel({ log }: { log: LogDetail }) {
           <p className="text-sm text-ink-soft">{result.plan.shrinkageNote} Flattening takes one {m.length(1 / 8)} pass off each face. A slab holding the pith usually checks as it dries.</p>
         </>
       )}
-      <Notice tone="caution" title="Sawing safely">
-        Chainsaw milling throws chips and fine dust and the logs roll: wear eye, ear and chainsaw protection, chock the log, and follow the saw maker’s instructions and your local rules.
-      </Notice>
+      <SafetyNotice caution={SAWING_CAUTION} />
     </section>
   );
 }

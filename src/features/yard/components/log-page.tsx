@@ -1,11 +1,9 @@
 import { Link } from 'react-router';
-import { areBookMatched } from '../../../../shared/slabs';
 import { useQuery } from '@tanstack/react-query';
 import { SAWING_METHOD_LABELS } from '../../../../shared/slabs';
 import { YARD_STATUS_LABELS } from '../../../../shared/slab-input';
 import { formatCents } from '../../../../shared/wood/index';
 import { BoardFeet, Dimensions, Length } from '../../../lib/units';
-import type { LogSlab } from '../../../../shared/logs';
 import { buttonClass } from '../../../components/ui/button';
 import { PageTitle } from '../../../components/ui/page-title';
 import { Tag } from '../../../components/ui/tag';
@@ -13,6 +11,7 @@ import { paths } from '../../../paths';
 import { logDetailQuery } from '../api';
 import { CutPlanPanel } from './cut-plan-panel';
 import { LogForm } from './log-form';
+import { MatchedSetsPanel } from './matched-sets-panel';
 
 
 export function LogPage({ id }: { id: number }) {
@@ -37,7 +36,7 @@ export function LogPage({ id }: { id: number }) {
         <h2 id="log-slabs" className="text-xl font-bold">Slabs in sawing order</h2>
         {log.slabs.length === 0 ? <p>No slabs recorded from this log yet.</p> : (
           <ol className="grid gap-1">
-            {log.slabs.map((s, i) => (
+            {log.slabs.map((s) => (
               <li key={s.id}>
                 <div className="flex flex-wrap items-center gap-3 rounded-md border border-line bg-surface-raised p-2">
                   <span className="w-8 text-right font-semibold">{s.sequenceInLog}</span>
@@ -47,14 +46,13 @@ export function LogPage({ id }: { id: number }) {
                   <span>{formatCents(s.priceCents)}</span>
                   <Tag tone={s.status === 'listed' ? 'moss' : s.status === 'withdrawn' ? 'danger' : 'neutral'}>{YARD_STATUS_LABELS[s.status]}</Tag>
                 </div>
-                {log.slabs[i + 1] && areBookMatched({ logId: id, sequenceInLog: s.sequenceInLog }, { logId: id, sequenceInLog: log.slabs[i + 1].sequenceInLog }) && (
-                  <p className="ml-11 border-l-2 border-accent pl-2 text-sm text-accent-strong">Book-matches the next slab (sawn side by side)</p>
-                )}
               </li>
             ))}
           </ol>
         )}
       </section>
+
+      {log.slabs.length >= 2 && <MatchedSetsPanel logId={log.id} slabs={log.slabs} />}
 
       <CutPlanPanel log={log} />
 

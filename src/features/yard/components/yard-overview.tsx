@@ -8,6 +8,8 @@ import { paths } from '../../../paths';
 import { inventoryQuery, type InventoryFilters } from '../api';
 import { InventoryTable } from './inventory-table';
 import { PhoneLink } from './phone-link';
+import { SafetyNotice } from '../../../components/safety-caution';
+import { EQUIPMENT_CAUTION, STAFF_DUST_NOISE_CAUTION } from '../../../../shared/safety';
 
 type Props = { filters: InventoryFilters; onFiltersChange: (next: InventoryFilters) => void };
 
@@ -40,6 +42,10 @@ export function YardOverview({ filters, onFiltersChange }: Props) {
       </nav>
       <PhoneLink />
       <InventoryTable filters={filters} onFiltersChange={onFiltersChange} />
+      <div className="grid gap-3 lg:grid-cols-2">
+        <SafetyNotice caution={EQUIPMENT_CAUTION} />
+        <SafetyNotice caution={STAFF_DUST_NOISE_CAUTION} />
+      </div>
     </div>
   );
 }
