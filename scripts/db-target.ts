@@ -22,14 +22,6 @@ export function isNonEmptyDir(dir: string) {
   return fs.existsSync(dir) && fs.readdirSync(dir).length > 0;
 }
 
-/**
- * PGlite leaves postmaster.pid while a process has the data dir open (and after a crash). Two
- * processes on one PGlite dir corrupt it, so the scripts stop unless told the server is down.
- */
-export function looksOpen(dataDir: string) {
-  return fs.existsSync(path.join(dataDir, 'postmaster.pid'));
-}
-
 /** Runs a PostgreSQL client tool (pg_dump, pg_restore, psql); throws with its stderr on failure. */
 export function runPgTool(tool: string, args: string[]) {
   const out = spawnSync(tool, args, { encoding: 'utf8' });

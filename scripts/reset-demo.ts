@@ -1,19 +1,26 @@
 /**
  * `npm run db:reset [-- --force]` — empties the database and the photo folder so the next
- * `npm start` writes the demo data afresh. Stop the server first. A PostgreSQL server
+ * `npm start` writes the demo data afresh. Refused while the shop runs on the folder. A PostgreSQL server
  * (DATABASE_URL) is only wiped with --force, since it may hold a real shop.
  */
 import fs from 'node:fs';
 import path from 'node:path';
+import { lockDataDir } from '../server/db/data-dir-lock';
 import { dbTarget, fail, parseArgs, runPgTool } from './db-target';
 
-export function resetDemo(opts: { force?: boolean; env?: NodeJS.ProcessEnv } = {}) {
+export async function resetDemo(opts: { force?: boolean; env?: NodeJS.ProcessEnv } = {}) {
   const target = dbTarget(opts.env);
   if (target.kind === 'postgres') {
     if (!opts.force) throw new Error('DATABASE_URL points at a PostgreSQL server; wiping it needs --force.');
     runPgTool('psql', ['--command', 'drop schema if exists public cascade; drop schema if exists drizzle cascade; create schema public;', target.url]);
   } else {
-    fs.rmSync(target.dataDir, { recursive: true, force: true });
+    // Refused at once while the shop (or a backup) holds the folder.
+    const lock = await lockDataDir(target.dataDir, { purpose: 'a reset (npm run db:reset)' });
+    try {
+      fs.rmSync(target.dataDir, { recursive: true, force: true });
+    } finally {
+      await lock.release();
+    }
   }
   // Photos go too (their rows are gone); the folder's .gitkeep stays so git still tracks it.
   if (fs.existsSync(target.uploadsDir)) {
@@ -25,10 +32,7 @@ export function resetDemo(opts: { force?: boolean; env?: NodeJS.ProcessEnv } = {
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) {
-  try {
-    const kind = resetDemo(parseArgs(process.argv.slice(2)));
-    console.log(`Emptied the ${kind} database and the uploads folder. \`npm start\` writes the demo data again.`);
-  } catch (err) {
-    fail((err as Error).message);
-  }
+  resetDemo(parseArgs(process.argv.slice(2)))
+    .then((kind) => console.log(`Emptied the ${kind} database and the uploads folder. \`npm start\` writes the demo data again.`))
+    .catch((err: Error) => fail(err.message));
 }

@@ -6,7 +6,8 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { PGlite } from '@electric-sql/pglite';
-import { dbTarget, fail, isNonEmptyDir, looksOpen, parseArgs, runPgTool } from './db-target';
+import { lockDataDir } from '../server/db/data-dir-lock';
+import { dbTarget, fail, isNonEmptyDir, parseArgs, runPgTool } from './db-target';
 
 export async function restore(file: string, opts: { force?: boolean; env?: NodeJS.ProcessEnv } = {}) {
   if (!fs.existsSync(file)) throw new Error(`no backup file at ${file}`);
@@ -20,23 +21,28 @@ export async function restore(file: string, opts: { force?: boolean; env?: NodeJ
     runPgTool('pg_restore', ['--clean', '--if-exists', '--no-owner', '--single-transaction', '--dbname', target.url, file]);
     return { kind: target.kind, keptAs: null };
   }
+  // The folder's lock is held from the first look to the last write: a running shop makes this refuse at once.
+  const lock = await lockDataDir(target.dataDir, { purpose: 'a restore (npm run db:restore)' });
   let keptAs: string | null = null;
-  if (isNonEmptyDir(target.dataDir)) {
-    if (!opts.force) {
-      throw new Error(`${target.dataDir} already holds a database. Restoring replaces it: stop the server and run again with --force `
-        + '(the current one is kept beside it, renamed).');
+  try {
+    if (isNonEmptyDir(target.dataDir)) {
+      if (!opts.force) {
+        throw new Error(`${target.dataDir} already holds a database. Restoring replaces it: run again with --force `
+          + '(the current one is kept beside it, renamed).');
+      }
+      keptAs = `${target.dataDir}.before-restore-${new Date().toISOString().replace(/[:.]/g, '-')}`;
+      fs.renameSync(target.dataDir, keptAs);
     }
-    if (looksOpen(target.dataDir)) console.warn('warning: the database looks open; make sure the server is stopped.');
-    keptAs = `${target.dataDir}.before-restore-${new Date().toISOString().replace(/[:.]/g, '-')}`;
-    fs.renameSync(target.dataDir, keptAs);
+    fs.mkdirSync(path.dirname(target.dataDir), { recursive: true });
+    const bytes = fs.readFileSync(file);
+    const pglite = new PGlite(target.dataDir, { loadDataDir: new Blob([bytes]) });
+    await pglite.waitReady;
+    // A backup that does not open as a database fails here, before anyone starts on it.
+    await pglite.query('select 1');
+    await pglite.close();
+  } finally {
+    await lock.release();
   }
-  fs.mkdirSync(path.dirname(target.dataDir), { recursive: true });
-  const bytes = fs.readFileSync(file);
-  const pglite = new PGlite(target.dataDir, { loadDataDir: new Blob([bytes]) });
-  await pglite.waitReady;
-  // A backup that does not open as a database fails here, before anyone starts on it.
-  await pglite.query('select 1');
-  await pglite.close();
   return { kind: target.kind, keptAs };
 }
 

@@ -45,16 +45,19 @@ export async function startStickerline({ env, dev = false, logger = getLogger() 
   const problems = production ? configProblems(env) : [];
   fs.mkdirSync(env.DATA_DIR, { recursive: true });
   fs.mkdirSync(env.UPLOADS_DIR, { recursive: true });
+  // The database first: a folder another process already holds is refused before anything else starts.
+  const database = await openDatabase({ databaseUrl: env.DATABASE_URL, dataDir: path.join(env.DATA_DIR, 'pglite'), purpose: 'the shop' });
   if (production) {
-    // The database is opened only to look for demo accounts; nothing is migrated or written before the checks pass.
-    const probe = await openDatabase({ databaseUrl: env.DATABASE_URL, dataDir: path.join(env.DATA_DIR, 'pglite') });
+    // Only looked at for demo accounts: nothing is migrated or written before the checks pass.
     try {
-      problems.push(...(await databaseProblems(probe.db)));
-    } finally {
-      await probe.close();
+      problems.push(...(await databaseProblems(database.db)));
+      refuseIfAny(problems);
+    } catch (err) {
+      await database.close();
+      throw err;
     }
-    refuseIfAny(problems);
   }
+  await migrateDatabase(database);
 
   const wantFakes = env.START_LOCAL_FAKES ? env.START_LOCAL_FAKES === 'true' : !production && !env.SMTP_PORT;
   // MAILDEV_WEB_PORT keeps the inbox at one address across restarts (a bookmarked tab keeps working).
@@ -69,8 +72,6 @@ export async function startStickerline({ env, dev = false, logger = getLogger() 
     protocol: env.STRIPE_PROTOCOL ?? (paymentFake ? ('http' as const) : undefined),
   };
 
-  const database = await openDatabase({ databaseUrl: env.DATABASE_URL, dataDir: path.join(env.DATA_DIR, 'pglite') });
-  await migrateDatabase(database);
 
   const publicPort = env.PORT;
   const apiPort = dev ? publicPort + 1 : publicPort;

@@ -73,3 +73,68 @@ export type LogSlab = {
 
 /** `targetMcPercent`: the mill's drying target, which the cut plan dries its slabs to. */
 export type LogDetail = LogSummary & { slabs: LogSlab[]; targetMcPercent: number };
+
+export type FieldProblems = Record<string, string[]>;
+
+/**
+ * Dates a log record cannot have: felled or milled after today — today as the calendar reads at the
+ * mill (MILL_TIME_ZONE), which the server passes in and the form gets from the server.
+ * (Milled before felled is checked by the schema itself.)
+ */
+export function logDateProblems(v: { felledOn?: string | null; milledOn?: string | null }, millToday: string): FieldProblems {
+  const out: FieldProblems = {};
+  if (v.felledOn && v.felledOn > millToday) out.felledOn = [`A log cannot be felled in the future (today at the mill is ${millToday})`];
+  if (v.milledOn && v.milledOn > millToday) out.milledOn = [`A log cannot be milled in the future (today at the mill is ${millToday})`];
+  return out;
+}
+
+/**
+ * How much wider than its log's butt diameter a slab may measure. A butt is usually measured a
+ * little above the root flare, and the flare makes the end of a butt slab wider than that diameter
+ * (common practice). 5 % is Stickerline's own allowance for it; anything wider is a typing slip or
+ * the wrong log.
+ */
+export const FLARE_ALLOWANCE = 0.05;
+
+export const widestSlabFor = (buttDiameterIn: number) => Math.round(buttDiameterIn * (1 + FLARE_ALLOWANCE) * 100) / 100;
+
+type LogSize = { code: string; buttDiameterIn: number; lengthIn: number };
+
+/** Field messages for a slab that could not have come out of `log`: wider than its butt (plus flare) or longer than it. */
+export function slabFitsLog(slab: { widthsIn?: number[]; lengthIn?: number }, log: LogSize): FieldProblems {
+  const out: FieldProblems = {};
+  const widest = widestSlabFor(log.buttDiameterIn);
+  (slab.widthsIn ?? []).forEach((w, i) => {
+    if (w > widest) {
+      out[`widthsIn.${i}`] = [`Wider than log ${log.code} allows: its butt is ${log.buttDiameterIn} in across (up to ${widest} in with flare)`];
+    }
+  });
+  if (slab.lengthIn !== undefined && slab.lengthIn > log.lengthIn) {
+    out.lengthIn = [`Longer than log ${log.code}, which is ${log.lengthIn} in long`];
+  }
+  return out;
+}
+
+/** Field messages for a log edit that its recorded slabs contradict (a slab wider than the new butt, longer than the new length). */
+export function logFitsSlabs(log: { buttDiameterIn?: number; lengthIn?: number }, slabs: { widestIn: number | null; longestIn: number | null }): FieldProblems {
+  const out: FieldProblems = {};
+  if (log.buttDiameterIn !== undefined && slabs.widestIn !== null && slabs.widestIn > widestSlabFor(log.buttDiameterIn)) {
+    out.buttDiameterIn = [`A slab from this log is ${slabs.widestIn} in wide; the butt must be at least ${Math.ceil((slabs.widestIn / (1 + FLARE_ALLOWANCE)) * 100) / 100} in across`];
+  }
+  if (log.lengthIn !== undefined && slabs.longestIn !== null && slabs.longestIn > log.lengthIn) {
+    out.lengthIn = [`A slab from this log is ${slabs.longestIn} in long; the log cannot be shorter`];
+  }
+  return out;
+}
+
+/** The next code in the yard's yearly series: L-2026-01, L-2026-02 … given the codes of that year already used. */
+export function nextLogCodeIn(year: string, usedCodes: string[]): string {
+  const prefix = `L-${year}-`;
+  const used = usedCodes.filter((c) => c.startsWith(prefix)).map((c) => Number(c.slice(prefix.length))).filter((n) => Number.isInteger(n));
+  return `${prefix}${String(Math.max(0, ...used) + 1).padStart(2, '0')}`;
+}
+
+/** The year a new log is numbered in: its felling year, else this year at the mill. */
+export const logCodeYear = (felledOn: string | null | undefined, millToday: string) => (felledOn || millToday).slice(0, 4);
+
+export type NextLogCode = { code: string; millToday: string };

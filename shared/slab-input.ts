@@ -18,18 +18,44 @@ export const SLAB_LIMITS = {
 } as const;
 
 /**
- * The one status workflow. Staff move slabs between the first four; `held`, `sold` and
- * `picked-up` are reached only through holds, checkout and pickup, never by editing a slab.
+ * What makes a slab change state: the yard crew editing it, a buyer's hold, a hold ending
+ * (released, expired or let go by the office), a paid checkout, the hand-over at pickup, a refund.
  */
-export const SLAB_TRANSITIONS: Record<SlabStatus, readonly SlabStatus[]> = {
-  drying: ['ready', 'withdrawn'],
-  ready: ['listed', 'withdrawn'],
-  listed: ['ready', 'held', 'withdrawn'],
-  held: ['listed', 'sold'],
-  sold: ['picked-up'],
-  'picked-up': [],
-  withdrawn: ['drying', 'ready'],
+export const SLAB_MOVE_CAUSES = ['yard', 'hold', 'hold-ended', 'sale', 'pickup', 'refund'] as const;
+export type SlabMoveCause = (typeof SLAB_MOVE_CAUSES)[number];
+
+/**
+ * The one table of allowed moves: from → to → what may make that move. The server's slab-state
+ * module moves slabs through this table and nothing else writes a slab's status. Staff move slabs
+ * between drying, ready, listed and withdrawn; `held`, `sold` and `picked-up` are reached only
+ * through holds, checkout and pickup; a refund puts a sold or collected slab back on sale or
+ * withdraws it.
+ */
+export const SLAB_MOVES: { readonly [F in SlabStatus]: { readonly [T in SlabStatus]?: readonly SlabMoveCause[] } } = {
+  drying: { ready: ['yard'], withdrawn: ['yard'] },
+  ready: { listed: ['yard'], withdrawn: ['yard'] },
+  listed: { ready: ['yard'], held: ['hold'], withdrawn: ['yard'] },
+  held: { listed: ['hold-ended'], sold: ['sale'] },
+  sold: { 'picked-up': ['pickup'], listed: ['refund'], withdrawn: ['refund'] },
+  'picked-up': { listed: ['refund'], withdrawn: ['refund'] },
+  withdrawn: { drying: ['yard'], ready: ['yard'] },
 };
+
+/** The states a new slab may start in. */
+export const SLAB_START_STATUSES = ['drying', 'ready'] as const satisfies readonly SlabStatus[];
+
+/** Whether `cause` may move a slab from `from` to `to`. */
+export const mayMoveSlab = (from: SlabStatus, to: SlabStatus, cause: SlabMoveCause) =>
+  SLAB_MOVES[from][to]?.includes(cause) ?? false;
+
+/** Every state a slab may be reached from by `cause` (what the conditional update matches on). */
+export const slabMoveSources = (to: SlabStatus, cause: SlabMoveCause): SlabStatus[] =>
+  SLAB_STATUSES.filter((from) => mayMoveSlab(from, to, cause));
+
+/** Next states from `from`, whatever the cause (read from SLAB_MOVES). */
+export const SLAB_TRANSITIONS = Object.fromEntries(
+  SLAB_STATUSES.map((from) => [from, Object.keys(SLAB_MOVES[from]) as SlabStatus[]]),
+) as unknown as Record<SlabStatus, readonly SlabStatus[]>;
 
 /** Status names as the yard crew reads them (buyers see their own wording on the slab page). */
 export const YARD_STATUS_LABELS: Record<SlabStatus, string> = {
@@ -42,12 +68,8 @@ export const YARD_STATUS_LABELS: Record<SlabStatus, string> = {
   withdrawn: 'Withdrawn',
 };
 
-export const STAFF_SET_STATUSES: readonly SlabStatus[] = ['drying', 'ready', 'listed', 'withdrawn'];
-
 /** Whether a seller or admin may move a slab from `from` to `to` by editing it. */
-export function canStaffMove(from: SlabStatus, to: SlabStatus): boolean {
-  return STAFF_SET_STATUSES.includes(from) && STAFF_SET_STATUSES.includes(to) && SLAB_TRANSITIONS[from].includes(to);
-}
+export const canStaffMove = (from: SlabStatus, to: SlabStatus) => mayMoveSlab(from, to, 'yard');
 
 /** The statuses a staff status select offers: the current one plus the legal next ones. */
 export const staffStatusChoices = (from: SlabStatus): SlabStatus[] =>
@@ -97,7 +119,7 @@ export const createSlabSchema = slabFields
     sequenceInLog: true, liveEdge: true, figures: true, figureNotes: true, defects: true, yardStack: true,
     yardPosition: true, priceOverrideCents: true, priceOverrideReason: true, description: true,
   })
-  .extend({ status: z.enum(['drying', 'ready'], { error: 'A new slab starts as drying or ready' }).optional() })
+  .extend({ status: z.enum(SLAB_START_STATUSES, { error: 'A new slab starts as drying or ready' }).optional() })
   .superRefine(checkOverride);
 
 export const updateSlabSchema = slabFields.omit({ logId: true }).partial()

@@ -38,7 +38,8 @@ export const SLAB_SORT_LABELS: Record<(typeof SLAB_SORTS)[number], string> = {
   'board-feet-asc': 'Fewest board feet',
 };
 
-const DRYING_STATE_VALUES = ['green', 'air-drying', 'air-dry', 'shop-dry'] as const;
+/** Drying states as stored (the words for them live in shared/wood DRYING_STATES). */
+export const DRYING_STATE_VALUES = ['green', 'air-drying', 'air-dry', 'shop-dry'] as const;
 
 const emptyToUndefined = (v: unknown) => (v === '' ? undefined : v);
 

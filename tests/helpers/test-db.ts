@@ -1,13 +1,14 @@
 import fs from 'node:fs';
 import { PGlite } from '@electric-sql/pglite';
+import { amcheck } from '@electric-sql/pglite/contrib/amcheck';
 import pg from 'pg';
 import { inject } from 'vitest';
 import { openDatabase, migrateDatabase, type Database } from '../../server/db/client';
 
-/** A fresh, migrated, empty database for one test file (a copy of the run's template). */
-export async function freshDatabase(): Promise<Database> {
+/** A fresh, migrated, empty database for one test file (a copy of the run's template); `amcheck` loads that extension. */
+export async function freshDatabase(opts: { amcheck?: boolean } = {}): Promise<Database> {
   const bytes = fs.readFileSync(inject('templatePath'));
-  const pglite = new PGlite({ loadDataDir: new Blob([bytes]) });
+  const pglite = new PGlite({ loadDataDir: new Blob([bytes]), extensions: opts.amcheck ? { amcheck } : {} });
   return openDatabase({ pglite });
 }
 

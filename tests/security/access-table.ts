@@ -55,6 +55,7 @@ export const ACCESS: Record<string, Access> = {
   'PUT /api/office/mill-rules': 'admin',
   'GET /api/logs': 'staff',
   'POST /api/logs': 'staff',
+  'GET /api/logs/next-code': 'staff',
   'GET /api/logs/:id': 'staff',
   'PATCH /api/logs/:id': 'staff',
   'POST /api/slabs': 'staff',

@@ -2,6 +2,8 @@
 // its CLI generates (compare with `npm run auth:check`); keep them in step when upgrading the library.
 import { sql } from 'drizzle-orm';
 import { boolean, check, index, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { USER_ROLES } from '../../../shared/office';
+import { oneOf } from './checks';
 
 export const user = pgTable('user', {
   id: text('id').primaryKey(),
@@ -18,7 +20,10 @@ export const user = pgTable('user', {
   // Stickerline's own column (not the auth library's): how this person wants sizes and weights
   // shown. Null until they choose; the browser's own choice applies meanwhile.
   units: text('units'),
-}, (t) => [check('user_units_known', sql`${t.units} is null or ${t.units} in ('imperial', 'metric')`)]);
+}, (t) => [
+  check('user_units_known', sql`${t.units} is null or ${t.units} in ('imperial', 'metric')`),
+  check('user_role_known', sql`${t.role} is null or ${oneOf(t.role, USER_ROLES)}`),
+]);
 
 export const session = pgTable('session', {
   id: text('id').primaryKey(),

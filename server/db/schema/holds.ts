@@ -1,7 +1,9 @@
 import { sql } from 'drizzle-orm';
-import { index, integer, pgTable, serial, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import { check, index, integer, pgTable, serial, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
 import { slabs } from './slabs';
 import { user } from './auth';
+import { HOLD_STATUSES } from '../../../shared/holds';
+import { oneOf } from './checks';
 
 export const holds = pgTable('holds', {
   id: serial('id').primaryKey(),
@@ -19,4 +21,7 @@ export const holds = pgTable('holds', {
   uniqueIndex('holds_one_active_per_slab').on(t.slabId).where(sql`${t.status} = 'active'`),
   index('holds_buyer_idx').on(t.buyerId, t.status),
   index('holds_expiry_idx').on(t.status, t.expiresAt),
+  check('holds_status_known', oneOf(t.status, HOLD_STATUSES)),
+  check('holds_expire_after_start', sql`${t.expiresAt} > ${t.createdAt}`),
+  check('holds_closed_when_ended', sql`(${t.status} = 'active') = (${t.closedAt} is null)`),
 ]);

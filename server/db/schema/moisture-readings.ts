@@ -2,6 +2,8 @@ import { sql } from 'drizzle-orm';
 import { check, date, doublePrecision, index, integer, pgTable, serial, text, timestamp } from 'drizzle-orm/pg-core';
 import { slabs } from './slabs';
 import { user } from './auth';
+import { METER_KINDS } from '../../../shared/slabs';
+import { MAX_STORED_MC_PERCENT, oneOf, sane, within } from './checks';
 
 export const moistureReadings = pgTable('moisture_readings', {
   id: serial('id').primaryKey(),
@@ -22,5 +24,12 @@ export const moistureReadings = pgTable('moisture_readings', {
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
 }, (t) => [
   index('moisture_slab_idx').on(t.slabId, t.measuredOn),
+  // A meter never reads 0 % in wood: an empty field is not a reading.
+  check('moisture_mc_in_range', within(t.mcPercent, 0, MAX_STORED_MC_PERCENT)),
+  check('moisture_meter_known', oneOf(t.meterKind, METER_KINDS)),
+  check('moisture_measured_on_sane', sane(t.measuredOn)),
+  check('moisture_depth_in_range', sql`${t.depthIn} is null or (${within(t.depthIn, 0, 12)})`),
+  check('moisture_ambient_rh_in_range', sql`${t.ambientRhPercent} is null or (${within(t.ambientRhPercent, 0, 100, { minInclusive: true })})`),
+  check('moisture_ambient_temp_in_range', sql`${t.ambientTempF} is null or (${within(t.ambientTempF, -60, 140, { minInclusive: true })})`),
   check('moisture_readings_review_values', sql`${t.review} in ('in-line', 'confirmed', 'unconfirmed')`),
 ]);

@@ -5,6 +5,14 @@ import {
 import { user } from './auth';
 import { slabs } from './slabs';
 import { pickupWindows } from './pickups';
+import { ORDER_STATUSES } from '../../../shared/checkout';
+import { cents, DB_LIMITS, oneOf, within } from './checks';
+
+/** What an order line can be: being paid for, sold, voided by a failed payment, refunded. */
+export const ORDER_LINE_STATUSES = ['pending', 'sold', 'void', 'refunded'] as const;
+export const PAYMENT_KINDS = ['charge', 'refund'] as const;
+/** `refunded`: a charge given back at once because the sale could not be recorded. */
+export const PAYMENT_STATUSES = ['pending', 'succeeded', 'failed', 'refunded'] as const;
 
 export const orders = pgTable('orders', {
   id: serial('id').primaryKey(),
@@ -39,6 +47,13 @@ export const orders = pgTable('orders', {
 }, (t) => [
   index('orders_buyer_idx').on(t.buyerId),
   index('orders_pickup_idx').on(t.pickupOn, t.pickupWindowId),
+  check('orders_status_known', oneOf(t.status, ORDER_STATUSES)),
+  check('orders_slabs_cents_in_range', cents(t.slabsCents)),
+  check('orders_services_cents_in_range', cents(t.servicesCents)),
+  check('orders_total_adds_up', sql`${t.totalCents} = ${t.slabsCents} + ${t.servicesCents}`),
+  check('orders_refunded_within_total', sql`${t.refundedCents} >= 0 and ${t.refundedCents} <= ${t.totalCents}`),
+  check('orders_weight_in_range', within(t.totalWeightLb, 0, DB_LIMITS.maxWeightLb)),
+  check('orders_longest_in_range', within(t.longestSlabIn, 0, DB_LIMITS.maxLengthIn)),
 ]);
 
 export const orderLines = pgTable('order_lines', {
@@ -64,6 +79,13 @@ export const orderLines = pgTable('order_lines', {
   // A slab is one of a kind: at most one sold line can exist for it.
   uniqueIndex('order_lines_one_sale_per_slab').on(t.slabId).where(sql`${t.status} = 'sold'`),
   index('order_lines_order_idx').on(t.orderId),
+  check('order_lines_status_known', oneOf(t.status, ORDER_LINE_STATUSES)),
+  check('order_lines_slab_cents_in_range', cents(t.slabCents)),
+  check('order_lines_services_cents_in_range', cents(t.servicesCents)),
+  check('order_lines_total_adds_up', sql`${t.totalCents} = ${t.slabCents} + ${t.servicesCents}`),
+  check('order_lines_board_feet_in_range', within(t.boardFeet, 0, DB_LIMITS.maxBoardFeet)),
+  check('order_lines_weight_in_range', within(t.weightLb, 0, DB_LIMITS.maxWeightLb)),
+  check('order_lines_length_in_range', within(t.lengthIn, 0, DB_LIMITS.maxLengthIn)),
 ]);
 
 export const payments = pgTable('payments', {
@@ -77,7 +99,12 @@ export const payments = pgTable('payments', {
   idempotencyKey: text('idempotency_key').unique(),
   createdBy: text('created_by'),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-}, (t) => [index('payments_order_idx').on(t.orderId)]);
+}, (t) => [
+  index('payments_order_idx').on(t.orderId),
+  check('payments_kind_known', oneOf(t.kind, PAYMENT_KINDS)),
+  check('payments_status_known', oneOf(t.status, PAYMENT_STATUSES)),
+  check('payments_amount_in_range', cents(t.amountCents)),
+]);
 
 /**
  * Which part of a refund was wood, services and tax on which line: the office numbers add these

@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm';
 import { boolean, check, index, integer, pgTable, serial, text, timestamp } from 'drizzle-orm/pg-core';
+import { within } from './checks';
 import { slabs } from './slabs';
 
 export const slabPhotos = pgTable('slab_photos', {
@@ -18,5 +19,8 @@ export const slabPhotos = pgTable('slab_photos', {
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
 }, (t) => [
   index('slab_photos_slab_idx').on(t.slabId),
+  check('slab_photos_width_in_range', within(t.width, 0, 100_000)),
+  check('slab_photos_height_in_range', within(t.height, 0, 100_000)),
+  check('slab_photos_position_in_range', within(t.position, 0, 10_000, { minInclusive: true })),
   check('slab_photos_view_known', sql`${t.view} is null or ${t.view} in ('top-face', 'bottom-face', 'end-grain', 'edge', 'defect')`),
 ]);

@@ -1,8 +1,11 @@
 import {
-  doublePrecision, index, integer, jsonb, pgTable, serial, text, timestamp, uniqueIndex,
+  check, doublePrecision, index, integer, jsonb, pgTable, serial, text, timestamp, uniqueIndex,
 } from 'drizzle-orm/pg-core';
 import { logs } from './logs';
 import { species } from './species';
+import { sql } from 'drizzle-orm';
+import { DRYING_STATE_VALUES, LIVE_EDGE, SLAB_STATUSES } from '../../../shared/slabs';
+import { cents, DB_LIMITS, oneOf, within } from './checks';
 
 export type SlabDefect = { kind: string; note: string };
 
@@ -40,4 +43,15 @@ export const slabs = pgTable('slabs', {
   index('slabs_status_idx').on(t.status),
   index('slabs_species_idx').on(t.speciesId),
   index('slabs_price_idx').on(t.priceCents),
+  check('slabs_status_known', oneOf(t.status, SLAB_STATUSES)),
+  check('slabs_drying_state_known', oneOf(t.dryingState, DRYING_STATE_VALUES)),
+  check('slabs_live_edge_known', oneOf(t.liveEdge, LIVE_EDGE)),
+  check('slabs_sequence_in_range', within(t.sequenceInLog, 1, 999, { minInclusive: true })),
+  check('slabs_thickness_in_range', within(t.thicknessIn, 0, DB_LIMITS.maxThicknessIn)),
+  check('slabs_width_in_range', within(t.widthIn, 0, DB_LIMITS.maxWidthIn)),
+  check('slabs_widths_measured', sql`jsonb_typeof(${t.widthsIn}) = 'array' and jsonb_array_length(${t.widthsIn}) between 1 and 8`),
+  check('slabs_length_in_range', within(t.lengthIn, 0, DB_LIMITS.maxLengthIn)),
+  check('slabs_board_feet_in_range', within(t.boardFeet, 0, DB_LIMITS.maxBoardFeet)),
+  check('slabs_price_in_range', cents(t.priceCents)),
+  check('slabs_price_override_in_range', sql`${t.priceOverrideCents} is null or (${cents(t.priceOverrideCents)} and ${t.priceOverrideCents} > 0)`),
 ]);

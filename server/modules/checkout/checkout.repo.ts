@@ -60,10 +60,6 @@ export const linesOf = (tx: Tx, orderId: number) => tx.select().from(orderLines)
 export const keepHoldsUntil = (tx: Tx, ids: number[], until: Date) =>
   tx.update(holds).set({ expiresAt: until }).where(and(inArray(holds.id, ids), eq(holds.status, 'active')));
 
-/** held → sold, only for slabs still held; returns the ones moved. */
-export const markSlabsSold = (tx: Tx, ids: number[]) =>
-  tx.update(slabs).set({ status: 'sold', updatedAt: new Date() }).where(and(inArray(slabs.id, ids), eq(slabs.status, 'held'))).returning({ id: slabs.id });
-
 export const insertPayment = (tx: Tx, values: typeof payments.$inferInsert) => tx.insert(payments).values(values).returning();
 export async function findPaymentByKey(tx: Tx, key: string) {
   const [row] = await tx.select().from(payments).where(eq(payments.idempotencyKey, key));

@@ -5,6 +5,7 @@ import type { PaymentPageState, Payments } from '../../lib/payments';
 import { queueEmail } from '../../lib/outbox';
 import { orderConfirmationEmail } from '../../lib/email-templates';
 import { closeHolds } from '../holds/holds.repo';
+import { moveSlabs } from '../slabs/slab-state';
 import { orderEmailInput } from './order-view';
 import * as repo from './checkout.repo';
 
@@ -31,7 +32,7 @@ async function complete(tx: Tx, deps: SettleDeps, order: Order, chargeId: string
   // Checked before any write: every slab must still be held for this buyer.
   const held = await repo.activeHoldsOn(tx, order.buyerId, slabIds);
   if (held.length !== slabIds.length) return false;
-  const sold = await repo.markSlabsSold(tx, slabIds);
+  const sold = await moveSlabs(tx, slabIds, 'sold', 'sale', now);
   if (sold.length !== slabIds.length) throw new Error(`order ${order.code}: a held slab was not in the held state`);
   await repo.setLineStatus(tx, order.id, 'sold'); // the unique index refuses a second sale of any slab
   await closeHolds(tx, held.map((h) => h.id), 'converted', order.buyerId, now);

@@ -3,19 +3,6 @@ import type { Tx } from '../../db/client';
 import { vouchedFor } from '../readings/reading-visibility';
 import { holds, moistureReadings, slabPhotos, slabs, species, user } from '../../db/schema/index';
 
-/** Moves a slab listed → held; returns nothing when another request got there first. */
-export async function markSlabHeld(tx: Tx, slabId: number) {
-  const [row] = await tx.update(slabs).set({ status: 'held', updatedAt: new Date() })
-    .where(and(eq(slabs.id, slabId), eq(slabs.status, 'listed'))).returning({ id: slabs.id });
-  return row ?? null;
-}
-
-export async function markSlabsListed(tx: Tx, slabIds: number[]) {
-  if (!slabIds.length) return;
-  await tx.update(slabs).set({ status: 'listed', updatedAt: new Date() })
-    .where(and(inArray(slabs.id, slabIds), eq(slabs.status, 'held')));
-}
-
 export async function findSlab(tx: Tx, slabId: number) {
   const [row] = await tx.select().from(slabs).where(eq(slabs.id, slabId));
   return row ?? null;

@@ -17,6 +17,7 @@ import { quoteSlab } from '../pricing/slab-quote';
 import { assertOneSet } from '../matched-sets/matched-sets.service';
 import { tellAboutRestOfSet } from './set-remainder';
 import * as repo from './holds.repo';
+import { moveSlab, moveSlabs } from '../slabs/slab-state';
 
 export type HoldOptions = { holdHours?: number; now?: Date; publicUrl?: string };
 
@@ -58,7 +59,7 @@ async function holdSlabs(db: Db, buyer: SessionUser, slabIds: number[], opts: Ho
       const groupId = slabIds.length > 1 ? randomUUID() : null;
       const created = [];
       for (const slabId of slabIds) {
-        if (!(await repo.markSlabHeld(tx, slabId))) throw await refusal(tx, slabId, buyer.id);
+        if (!(await moveSlab(tx, slabId, 'held', 'hold', now))) throw await refusal(tx, slabId, buyer.id);
         created.push(await repo.insertHold(tx, { slabId, buyerId: buyer.id, groupId, expiresAt, createdAt: now }));
       }
       const held = await repo.slabLabels(tx, slabIds);
@@ -113,7 +114,7 @@ export async function releaseHold(db: Db, actor: SessionUser, holdId: number, { 
     if (hold.status !== 'active') throw new AppError(409, 'hold_closed', 'That hold has already ended.');
     const [closed] = await repo.closeHolds(tx, [hold.id], 'released', actor.id);
     if (!closed) throw new AppError(409, 'hold_closed', 'That hold has already ended.');
-    await repo.markSlabsListed(tx, [hold.slabId]);
+    await moveSlabs(tx, [hold.slabId], 'listed', 'hold-ended');
     await tellWatchersSlabsAreFree(tx, [hold.slabId], { publicUrl });
     if (hold.buyerId !== actor.id) {
       await recordAudit(tx, { actor, action: 'hold.release', entityType: 'hold', entityId: hold.id, before: { status: 'active' }, after: { status: 'released' } });
@@ -131,7 +132,7 @@ export async function releaseExpiredHolds(db: Db, { now = new Date(), publicUrl 
     const closed = await repo.closeHolds(tx, expired.map((e) => e.hold.id), 'expired', 'system', now);
     const closedIds = new Set(closed.map((h) => h.id));
     const done = expired.filter((e) => closedIds.has(e.hold.id));
-    await repo.markSlabsListed(tx, done.map((e) => e.hold.slabId));
+    await moveSlabs(tx, done.map((e) => e.hold.slabId), 'listed', 'hold-ended', now);
     await tellAboutRestOfSet(tx, closed, 'expired', null, { publicUrl });
     await tellWatchersSlabsAreFree(tx, done.map((e) => e.hold.slabId), { publicUrl, now });
     const byBuyer = new Map<string, typeof done>();

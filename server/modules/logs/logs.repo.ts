@@ -24,6 +24,15 @@ export function findLogSlabs(db: Tx, logId: number) {
   }).from(slabs).where(eq(slabs.logId, logId)).orderBy(asc(slabs.sequenceInLog));
 }
 
+/** The widest station and the longest slab recorded from a log (nulls when it has none). */
+export async function slabExtremes(db: Tx, logId: number) {
+  const [row] = await db.select({
+    widestIn: sql<number | null>`max((select max(w::float8) from jsonb_array_elements_text(${slabs.widthsIn}) w))`,
+    longestIn: sql<number | null>`max(${slabs.lengthIn})`,
+  }).from(slabs).where(eq(slabs.logId, logId));
+  return { widestIn: row?.widestIn === null || row?.widestIn === undefined ? null : Number(row.widestIn), longestIn: row?.longestIn == null ? null : Number(row.longestIn) };
+}
+
 export async function findSpeciesBySlug(db: Tx, slug: string) {
   const [row] = await db.select().from(species).where(eq(species.slug, slug));
   return row ?? null;

@@ -1,7 +1,11 @@
 import type { Db } from '../../db/client';
 import { AppError, notFound, validationError } from '../../lib/errors';
 import type { SessionUser } from '../../lib/session';
-import { createLogSchema, updateLogSchema, type LogDetail, type LogSummary } from '../../../shared/logs';
+import {
+  createLogSchema, logCodeYear, logDateProblems, logFitsSlabs, nextLogCodeIn, updateLogSchema,
+  type FieldProblems, type LogDetail, type LogSummary, type NextLogCode,
+} from '../../../shared/logs';
+import { millDay } from '../pickups/slot-calendar';
 import * as repo from './logs.repo';
 import { readMillSettings } from '../pricing/pricing.repo';
 
@@ -31,16 +35,19 @@ export async function getLog(db: Db, id: number): Promise<LogDetail> {
   return { ...toSummary(row), targetMcPercent: settings?.targetMcPercent ?? 8, slabs: slabs.map((s) => ({ ...s, status: s.status as LogDetail['slabs'][number]['status'] })) };
 }
 
-/** Next code in the yard's yearly series: L-2026-01, L-2026-02 … (year of felling, else this year). */
-async function nextLogCode(db: Db, felledOn: string | null | undefined) {
-  const year = (felledOn ?? new Date().toISOString()).slice(0, 4);
-  const prefix = `L-${year}-`;
-  const used = (await repo.codesWithPrefix(db, prefix))
-    .map((c) => Number(c.slice(prefix.length)))
-    .filter((n) => Number.isInteger(n));
-  const next = Math.max(0, ...used) + 1;
-  return `${prefix}${String(next).padStart(2, '0')}`;
+/**
+ * The code a new log gets when none is typed: the next in its felling year's series (this year at
+ * the mill when the felling date is unknown). The log form's preview and createLog both ask this.
+ */
+export async function nextLogCode(db: Db, felledOn: string | null | undefined, now = new Date()): Promise<NextLogCode> {
+  const millToday = millDay(now);
+  const year = logCodeYear(felledOn, millToday);
+  return { code: nextLogCodeIn(year, await repo.codesWithPrefix(db, `L-${year}-`)), millToday };
 }
+
+const refuse = (problems: FieldProblems) => {
+  if (Object.keys(problems).length) throw validationError(problems);
+};
 
 async function speciesIdFor(db: Db, slug: string) {
   const sp = await repo.findSpeciesBySlug(db, slug);
@@ -51,14 +58,15 @@ async function speciesIdFor(db: Db, slug: string) {
 const codeTaken = (code: string) =>
   new AppError(409, 'conflict', `Log code ${code} is already used.`, { code: [`${code} is already used by another log`] });
 
-export async function createLog(db: Db, raw: unknown, _actor: SessionUser): Promise<LogDetail> {
+export async function createLog(db: Db, raw: unknown, _actor: SessionUser, now = new Date()): Promise<LogDetail> {
   const input = createLogSchema.parse(raw);
+  refuse(logDateProblems(input, millDay(now)));
   const speciesId = await speciesIdFor(db, input.speciesSlug);
   if (input.code && (await repo.logCodeTaken(db, input.code))) throw codeTaken(input.code);
   const { speciesSlug: _s, ...rest } = input;
   // Two staff recording logs at once may pick the same generated code: the unique key decides, we retry.
   for (let attempt = 0; ; attempt++) {
-    const code = input.code ?? (await nextLogCode(db, input.felledOn));
+    const code = input.code ?? (await nextLogCode(db, input.felledOn, now)).code;
     try {
       const row = await repo.insertLog(db, {
         ...rest, code, speciesId, originNote: rest.originNote ?? '', notes: rest.notes ?? '',
@@ -72,10 +80,13 @@ export async function createLog(db: Db, raw: unknown, _actor: SessionUser): Prom
   }
 }
 
-export async function updateLog(db: Db, id: number, raw: unknown): Promise<LogDetail> {
+export async function updateLog(db: Db, id: number, raw: unknown, now = new Date()): Promise<LogDetail> {
   const input = updateLogSchema.parse(raw);
+  refuse(logDateProblems(input, millDay(now)));
   const existing = await repo.findLog(db, id);
   if (!existing) throw notFound('That log');
+  // The slabs already recorded from this log must still fit it.
+  refuse(logFitsSlabs(input, await repo.slabExtremes(db, id)));
   // Check the diameters and dates against the stored values too, not only against each other.
   const merged = { ...existing.log, ...input };
   if (merged.topDiameterIn > merged.buttDiameterIn) {

@@ -20,10 +20,3 @@ export async function closeHold(db: Tx, id: number, closedBy: string) {
     .where(and(eq(holds.id, id), eq(holds.status, 'active'))).returning();
   return row ?? null;
 }
-
-/** Only a slab that is still marked held goes back on sale; a sold slab stays sold. */
-export async function relistHeldSlab(db: Tx, slabId: number) {
-  const [row] = await db.update(slabs).set({ status: 'listed', updatedAt: new Date() })
-    .where(and(eq(slabs.id, slabId), eq(slabs.status, 'held'))).returning({ id: slabs.id });
-  return Boolean(row);
-}

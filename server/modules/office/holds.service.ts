@@ -6,6 +6,7 @@ import type { ActiveHold } from '../../../shared/office';
 import { tellAboutRestOfSet } from '../holds/set-remainder';
 import { tellWatchersSlabsAreFree } from '../buyer-lists/slab-watches';
 import * as repo from './holds.repo';
+import { moveSlab } from '../slabs/slab-state';
 
 export async function listActiveHolds(db: Db): Promise<ActiveHold[]> {
   const rows = await repo.findActiveHolds(db);
@@ -19,7 +20,8 @@ export async function releaseHold(db: Db, actor: SessionUser, id: number, { publ
     if (!hold) throw notFound('That hold');
     if (hold.status !== 'active') throw new AppError(409, 'hold_not_active', `That hold is already ${hold.status}; nothing to release.`);
     const closed = await repo.closeHold(tx, id, actor.id);
-    const relisted = await repo.relistHeldSlab(tx, hold.slabId);
+    // Only a slab still held goes back on sale; a sold slab stays sold.
+    const relisted = Boolean(await moveSlab(tx, hold.slabId, 'listed', 'hold-ended'));
     if (relisted) await tellWatchersSlabsAreFree(tx, [hold.slabId], { publicUrl });
     await recordAudit(tx, {
       actor, action: 'hold.release', entityType: 'hold', entityId: id,

@@ -72,11 +72,6 @@ export async function updateOrder(db: Tx, id: number, values: Partial<typeof ord
   return row;
 }
 
-export function setSlabStatus(db: Tx, slabIds: number[], status: string) {
-  if (!slabIds.length) return Promise.resolve();
-  return db.update(slabs).set({ status, updatedAt: new Date() }).where(inArray(slabs.id, slabIds));
-}
-
 export function setLinesStatus(db: Tx, lineIds: number[], status: 'sold' | 'refunded') {
   if (!lineIds.length) return Promise.resolve();
   return db.update(orderLines).set({ status }).where(inArray(orderLines.id, lineIds));

@@ -11,6 +11,7 @@ import { readYardAddress } from '../pickups/pickups.repo';
 import { claimPickupPlace } from '../pickups/pickups.service';
 import { addDays, millDay, windowStart } from '../pickups/slot-calendar';
 import * as repo from './orders.repo';
+import { moveEverySlab } from '../slabs/slab-state';
 import { getOrderDetail } from './orders.service';
 import { issueRefund, sendQueuedMail, type RefundDeps } from './refunds.service';
 
@@ -67,7 +68,7 @@ export async function markPickedUp(db: Db, actor: SessionUser, orderId: number, 
     }
     const slabIds = await soldSlabIds(tx, orderId);
     await repo.updateOrder(tx, orderId, { status: 'picked-up', pickedUpAt: now, pickedUpBy: actor.id });
-    await repo.setSlabStatus(tx, slabIds, 'picked-up');
+    await moveEverySlab(tx, slabIds, 'picked-up', 'pickup', now);
     await recordAudit(tx, { actor, action: 'order.picked-up', entityType: 'order', entityId: orderId, before: { status: order.status }, after: { status: 'picked-up', pickedUpAt: now.toISOString(), slabIds } });
   });
   return getOrderDetail(db, orderId);

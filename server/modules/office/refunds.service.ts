@@ -10,6 +10,7 @@ import { formatCents } from '../../../shared/wood/index';
 import type { CreateRefundInput } from '../../../shared/office';
 import * as orders from './orders.repo';
 import * as repo from './refunds.repo';
+import { moveSlabs } from '../slabs/slab-state';
 import { getLogger } from '../../lib/logger';
 import { getOrderDetail, toPaymentView } from './orders.service';
 import { recordRefundAllocation } from './refund-allocation';
@@ -81,7 +82,8 @@ export async function issueRefund(deps: RefundDeps, actor: SessionUser | null, o
     const lines = (await orders.linesOf(tx, [orderId])).map((l) => l.line).filter((l) => r.slabIds.includes(l.slabId) && l.status === 'sold');
     await recordRefundAllocation(tx, { orderId, paymentId: payment.id, amountCents: r.amountCents, fullLineIds: lines.map((l) => l.id) });
     await orders.setLinesStatus(tx, lines.map((l) => l.id), 'refunded');
-    await orders.setSlabStatus(tx, lines.map((l) => l.slabId), r.returnSlabsTo);
+    // The money has gone back already: a slab that is somehow elsewhere is left where it is, never blocks the record.
+    await moveSlabs(tx, lines.map((l) => l.slabId), r.returnSlabsTo, 'refund');
     const refundedCents = current.refundedCents + r.amountCents;
     const status = opts.keepStatus ?? (refundedCents >= current.totalCents ? 'refunded' : current.status);
     await orders.updateOrder(tx, orderId, { refundedCents, status });

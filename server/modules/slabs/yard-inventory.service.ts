@@ -9,6 +9,7 @@ import { SLAB_STATUSES, type SlabStatus } from '../../../shared/slabs';
 import { assertPublishable, assertStaffMove } from './yard-slabs.workflow';
 import { withForecasts } from './yard-slabs.service';
 import * as repo from './yard-slabs.repo';
+import { moveEverySlab } from './slab-state';
 
 function parseQuery(raw: Record<string, unknown>) {
   const parsed = yardSlabQuerySchema.safeParse(raw);
@@ -68,7 +69,7 @@ export async function bulkSlabAction(db: Db, raw: unknown, actor: SessionUser): 
         if (from === to) return from;
         assertStaffMove(from, to);
         if (to === 'listed') await assertPublishable(tx, id);
-        await repo.updateSlab(tx, id, { status: to, ...(to === 'listed' ? { listedAt: new Date() } : {}) });
+        await moveEverySlab(tx, [id], to, 'yard');
         await recordAudit(tx, { actor, action: 'slab.status', entityType: 'slab', entityId: id, before: { status: from }, after: { status: to } });
         return to;
       });

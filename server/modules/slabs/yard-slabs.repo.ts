@@ -131,7 +131,8 @@ export async function insertSlab(tx: Tx, values: typeof slabs.$inferInsert) {
   return row;
 }
 
-export async function updateSlab(tx: Tx, id: number, values: Partial<typeof slabs.$inferInsert>) {
+/** Everything but the status, which only slab-state.ts moves. */
+export async function updateSlab(tx: Tx, id: number, values: Omit<Partial<typeof slabs.$inferInsert>, 'status' | 'listedAt'>) {
   const [row] = await tx.update(slabs).set({ ...values, updatedAt: new Date() }).where(eq(slabs.id, id)).returning();
   return row;
 }

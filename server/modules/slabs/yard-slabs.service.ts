@@ -12,6 +12,14 @@ import { derivedSlabColumns } from './slab-derived';
 import { assertPublishable, assertStaffMove } from './yard-slabs.workflow';
 import * as repo from './yard-slabs.repo';
 import { forecastAirDry } from './drying-forecast';
+import { moveEverySlab, startingStatus } from './slab-state';
+import { slabFitsLog } from '../../../shared/logs';
+
+/** A slab cannot be wider than its log's butt (plus flare) or longer than the log: refused at the field. */
+function assertFitsLog(slab: { widthsIn?: number[]; lengthIn?: number }, log: Parameters<typeof slabFitsLog>[1]) {
+  const problems = slabFitsLog(slab, log);
+  if (Object.keys(problems).length) throw validationError(problems);
+}
 
 type Row = NonNullable<Awaited<ReturnType<typeof repo.findYardRow>>>;
 
@@ -91,6 +99,7 @@ export async function createSlab(db: Db, raw: unknown, actor: SessionUser): Prom
     const overrideCents = input.priceOverrideCents ?? null;
     const overrideReason = overrideCents === null ? null : input.priceOverrideReason?.trim() ?? null;
     const measures = { thicknessIn: input.thicknessIn, widthsIn: input.widthsIn, lengthIn: input.lengthIn, figures: input.figures ?? [] };
+    assertFitsLog(measures, found.log);
     const derived = derivedSlabColumns({ ...measures, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason }, found.rate, await loadPricingRules(tx));
     const row = await repo.insertSlab(tx, {
       ...measures, ...derived, code: await freeSlabCode(tx, found.log.code, seq), logId: found.log.id,
@@ -98,7 +107,7 @@ export async function createSlab(db: Db, raw: unknown, actor: SessionUser): Prom
       figureNotes: input.figureNotes ?? '', defects: input.defects ?? [], yardStack: input.yardStack ?? '',
       yardPosition: input.yardPosition ?? '', description: input.description ?? '',
       priceOverrideCents: overrideCents, priceOverrideReason: overrideReason,
-      status: input.status ?? 'drying', dryingState: await dryingStateOf(tx, null),
+      status: startingStatus(input.status), dryingState: await dryingStateOf(tx, null),
     });
     await recordAudit(tx, { actor, action: 'slab.create', entityType: 'slab', entityId: row.id, before: null, after: { status: row.status, ...money(row) } });
     return row.id;
@@ -134,16 +143,20 @@ export async function updateSlab(db: Db, id: number, raw: unknown, actor: Sessio
       thicknessIn: input.thicknessIn ?? slab.thicknessIn, widthsIn: input.widthsIn ?? slab.widthsIn,
       lengthIn: input.lengthIn ?? slab.lengthIn, figures: input.figures ?? slab.figures,
     };
+    if (input.widthsIn !== undefined || input.lengthIn !== undefined) {
+      const found = await repo.findLogWithRate(tx, slab.logId);
+      if (found) assertFitsLog({ widthsIn: input.widthsIn, lengthIn: input.lengthIn }, found.log);
+    }
     const worked = derivedSlabColumns({ ...measures, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason }, await repo.speciesRate(tx, slab.speciesId), await loadPricingRules(tx));
     // A sold slab keeps the price it sold at, whatever is corrected on its record afterwards.
     const derived = isSold(from) ? { ...worked, priceCents: slab.priceCents } : worked;
     const { status: _s, priceOverrideCents: _c, priceOverrideReason: _r, ...rest } = input;
     const after = await repo.updateSlab(tx, id, {
       ...rest, ...measures, ...derived, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason,
-      status: to, dryingState: await dryingStateOf(tx, id),
-      ...(to === 'listed' && from !== 'listed' ? { listedAt: new Date() } : {}),
+      dryingState: await dryingStateOf(tx, id),
     });
     if (from !== to) {
+      await moveEverySlab(tx, [id], to, 'yard');
       await recordAudit(tx, { actor, action: 'slab.status', entityType: 'slab', entityId: id, before: { status: from }, after: { status: to } });
     }
     if (after.priceCents !== slab.priceCents || after.priceOverrideCents !== slab.priceOverrideCents || after.priceOverrideReason !== slab.priceOverrideReason) {

@@ -1,7 +1,7 @@
 import { keepPreviousData, queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '../../lib/api-client';
 import type { LogMatchedSets, MatchedSetView } from '../../../shared/matched-sets';
-import type { CreateLogInput, LogDetail, LogSummary, UpdateLog } from '../../../shared/logs';
+import type { CreateLogInput, LogDetail, LogSummary, NextLogCode, UpdateLog } from '../../../shared/logs';
 import type {
   BulkResult, BulkSlabAction, CreateFigureKind, CreateSlab, FigureKind, UpdateSlab, YardSlabDetail, YardSlabPage,
 } from '../../../shared/slab-input';
@@ -39,6 +39,16 @@ export type ShopAddress = { url: string; phonesCanReach: boolean; suggestions: s
 
 export const shopAddressQuery = () =>
   queryOptions({ queryKey: yardKeys.shopAddress(), queryFn: () => apiFetch<ShopAddress>('/api/yard/shop-address'), staleTime: Infinity });
+
+/** The code a new log would get now, and today's date at the mill (for the form's date checks). Under the logs key, so saving a log refreshes it. */
+export const nextLogCodeQuery = (felledOn: string | null | undefined) => {
+  const day = felledOn && /^\d{4}-\d{2}-\d{2}$/.test(felledOn) ? felledOn : '';
+  return queryOptions({
+    queryKey: [...yardKeys.logs(), 'next-code', day] as const,
+    queryFn: () => apiFetch<NextLogCode>(`/api/logs/next-code${day ? `?felledOn=${day}` : ''}`),
+    placeholderData: keepPreviousData,
+  });
+};
 
 export const logListQuery = () =>
   queryOptions({ queryKey: yardKeys.logs(), queryFn: async () => (await apiFetch<{ items: LogSummary[] }>('/api/logs')).items });

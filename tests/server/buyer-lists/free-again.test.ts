@@ -82,7 +82,7 @@ describe('"tell me when this held slab comes free"', () => {
     await hold(holder.agent, slab.id);
     await watch(watcher.agent, slab.id);
     await t.db.execute(`update slabs set status = 'sold' where id = ${slab.id}`);
-    await t.db.execute(`update holds set status = 'converted' where slab_id = ${slab.id}`);
+    await t.db.execute(`update holds set status = 'converted', closed_at = now() where slab_id = ${slab.id}`);
     await releaseExpiredHolds(t.db, { now: new Date(Date.now() + 48 * 3_600_000) });
     expect(await kindsTo(watcher.email)).toEqual([]);
     expect(await mailTo(watcher.email)).toEqual([]);

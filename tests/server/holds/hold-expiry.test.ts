@@ -39,7 +39,7 @@ describe('expired holds', () => {
     const slab = await slabRow(t.db, await logRow(t.db, 'black-walnut'));
     const buyer = await t.signedInAs('buyer');
     const { body } = await hold(buyer.agent, slab.id);
-    await t.db.update(holds).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(holds.id, body.hold.id));
+    await t.db.update(holds).set({ createdAt: new Date(Date.now() - 3_600_000), expiresAt: new Date(Date.now() - 1000) }).where(eq(holds.id, body.hold.id));
     expect((await buyer.agent.get('/api/holds')).body.holds).toEqual([]);
   });
 

@@ -111,7 +111,7 @@ describe('one slab of a held set leaves', () => {
     expect((await admin.agent.delete(`/api/office/holds/${placed[0].id}`).set('Origin', TEST_ORIGIN)).status).toBe(200);
     expect((await remainderMails(buyer.email))[0].text).toMatch(/was released by the mill office/);
 
-    await t.db.update(holds).set({ expiresAt: new Date(Date.now() - 60_000) }).where(eq(holds.id, placed[1].id));
+    await t.db.update(holds).set({ createdAt: new Date(Date.now() - 3_600_000), expiresAt: new Date(Date.now() - 60_000) }).where(eq(holds.id, placed[1].id));
     await releaseExpiredHolds(t.db, { now: new Date() });
     const mails = await remainderMails(buyer.email);
     expect(mails).toHaveLength(2);

@@ -122,7 +122,7 @@ describe('a reading that jumps from the previous one', () => {
 describe('buyers see only readings someone stands behind', () => {
   it('an unconfirmed reading stays in the yard list but not on the public slab page, its latest MC, weight or drying state', async () => {
     const slab = await slabWithReading(walnut, 12, daysAgo(20));
-    await t.db.insert(moistureReadings).values({ slabId: slab.id, measuredOn: daysAgo(1), mcPercent: 0, meterKind: 'pin', location: '', review: 'unconfirmed' });
+    await t.db.insert(moistureReadings).values({ slabId: slab.id, measuredOn: daysAgo(1), mcPercent: 3, meterKind: 'pin', location: '', review: 'unconfirmed' });
     const pub = await request(t.app).get(`/api/slabs/${slab.id}`);
     expect(pub.status).toBe(200);
     expect(pub.body.moistureReadings.map((r: { mcPercent: number }) => r.mcPercent)).toEqual([12]);

@@ -1,16 +1,16 @@
-import { useForm } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { z } from 'zod';
-import { createLogSchema, type LogDetail } from '../../../../shared/logs';
+import { createLogSchema, logDateProblems, type LogDetail } from '../../../../shared/logs';
 import { SAWING_METHODS, SAWING_METHOD_LABELS } from '../../../../shared/slabs';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
 import { Button } from '../../../components/ui/button';
 import { InchesField } from '../../../components/ui/inches-field';
 import { inchesForInput } from '../../../../shared/wood/index';
 import { Notice } from '../../../components/ui/notice';
-import { useCreateLog, useUpdateLog, yardSpeciesQuery } from '../api';
+import { nextLogCodeQuery, useCreateLog, useUpdateLog, yardSpeciesQuery } from '../api';
 import { applyServerErrors } from './server-errors';
 
 type In = z.input<typeof createLogSchema>;
@@ -26,7 +26,7 @@ export function LogForm({ log, onSaved }: { log?: LogDetail; onSaved: (log: LogD
   const create = useCreateLog();
   const update = useUpdateLog(log?.id ?? 0);
   const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<In, unknown, Out>({
+  const { register, control, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<In, unknown, Out>({
     resolver: zodResolver(createLogSchema),
     defaultValues: log
       ? {
@@ -36,8 +36,15 @@ export function LogForm({ log, onSaved }: { log?: LogDetail; onSaved: (log: LogD
       : { sawingMethod: 'live-edge-slabbing', originNote: '', notes: '', felledOn: null, milledOn: null },
   });
 
+  const felledOn = useWatch({ control, name: 'felledOn' });
+  // The server's own answer: the code createLog would store now, and today's date at the mill.
+  const { data: next } = useQuery(nextLogCodeQuery(felledOn));
+
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
+    const dateProblems = next ? logDateProblems(values, next.millToday) : {};
+    for (const [field, [message]] of Object.entries(dateProblems)) setError(field as 'felledOn' | 'milledOn', { type: 'validate', message });
+    if (Object.keys(dateProblems).length) return;
     try {
       onSaved(log ? await update.mutateAsync(values) : await create.mutateAsync(values));
     } catch (e) {
@@ -52,10 +59,11 @@ export function LogForm({ log, onSaved }: { log?: LogDetail; onSaved: (log: LogD
         <option value="">Choose…</option>
         {species.map((s) => <option key={s.slug} value={s.slug}>{s.name}</option>)}
       </SelectField>
-      <TextField label="Log code" hint="Leave empty to number it in this year’s series (L-2026-07)." error={errors.code?.message}
+      <TextField label="Log code" error={errors.code?.message}
+        hint={log ? undefined : next ? `Leave empty and it is numbered ${next.code}, the next in its year’s series.` : 'Leave empty to number it in its year’s series.'}
         autoCapitalize="characters" {...register('code', { setValueAs: blankToUndefined })} />
-      <TextField label="Felled on" type="date" error={errors.felledOn?.message} {...register('felledOn', { setValueAs: blankToNull })} />
-      <TextField label="Milled on" type="date" hint="Leave empty until the log is sawn." error={errors.milledOn?.message} {...register('milledOn', { setValueAs: blankToNull })} />
+      <TextField label="Felled on" type="date" max={next?.millToday} error={errors.felledOn?.message} {...register('felledOn', { setValueAs: blankToNull })} />
+      <TextField label="Milled on" type="date" max={next?.millToday} hint="Leave empty until the log is sawn." error={errors.milledOn?.message} {...register('milledOn', { setValueAs: blankToNull })} />
       <InchesField label="Length (in)" error={errors.lengthIn?.message} {...register('lengthIn')} />
       <SelectField label="Sawing method" error={errors.sawingMethod?.message} {...register('sawingMethod')}>
         {SAWING_METHODS.map((m) => <option key={m} value={m}>{SAWING_METHOD_LABELS[m]}</option>)}

@@ -3,7 +3,8 @@ import { Link } from 'react-router';
 import { useForm, useWatch } from 'react-hook-form';
 import { useQuery } from '@tanstack/react-query';
 import { LIVE_EDGE, LIVE_EDGE_LABELS, type SlabStatus } from '../../../../shared/slabs';
-import { staffStatusChoices, YARD_STATUS_LABELS, type YardSlabDetail } from '../../../../shared/slab-input';
+import { staffStatusChoices, YARD_STATUS_LABELS, type CreateSlab, type YardSlabDetail } from '../../../../shared/slab-input';
+import { slabFitsLog } from '../../../../shared/logs';
 import { formatCents } from '../../../../shared/wood/index';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
@@ -34,10 +35,16 @@ export function SlabForm({ slab, logId, onSaved }: Props) {
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
+    const renamed = (name: string) => formFieldName(name) as keyof SlabFormValues;
+    // The same rule the server applies: no wider than the log's butt (plus flare), no longer than the log.
+    const parsed = values as unknown as Partial<CreateSlab>;
+    const log = logs.find((l) => l.id === (slab?.logId ?? parsed.logId));
+    const misfit = log ? slabFitsLog(parsed, log) : {};
+    for (const [field, [message]] of Object.entries(misfit)) setError(renamed(field), { type: 'validate', message });
+    if (Object.keys(misfit).length) return;
     try {
       onSaved(await save.mutateAsync(values as never));
     } catch (e) {
-      const renamed = (name: string) => formFieldName(name) as keyof SlabFormValues;
       setFormError(applyServerErrors(e, (name, err) => setError(renamed(String(name)), err), [...FORM_FIELDS, 'widthsIn', 'priceOverrideCents']));
     }
   });

@@ -32,6 +32,7 @@ CREATE TABLE "sales_terms" (
 	CONSTRAINT "sales_terms_tax_range" CHECK ("sales_terms"."sales_tax_milli_percent" between 0 and 25000)
 );
 --> statement-breakpoint
+ALTER TABLE "orders" DROP CONSTRAINT "orders_status_known";--> statement-breakpoint
 ALTER TABLE "order_lines" ADD COLUMN "tax_cents" integer DEFAULT 0 NOT NULL;--> statement-breakpoint
 ALTER TABLE "orders" ADD COLUMN "tax_cents" integer DEFAULT 0 NOT NULL;--> statement-breakpoint
 ALTER TABLE "orders" ADD COLUMN "tax_exempt_certificate" text;--> statement-breakpoint
@@ -45,6 +46,7 @@ CREATE INDEX "refund_lines_line_idx" ON "refund_lines" USING btree ("order_line_
 CREATE UNIQUE INDEX "resale_certificates_one_per_buyer" ON "resale_certificates" USING btree ("buyer_id");--> statement-breakpoint
 CREATE INDEX "resale_certificates_status_idx" ON "resale_certificates" USING btree ("status");--> statement-breakpoint
 ALTER TABLE "orders" ADD CONSTRAINT "orders_checkout_session_id_unique" UNIQUE("checkout_session_id");--> statement-breakpoint
+ALTER TABLE "orders" ADD CONSTRAINT "orders_status_known" CHECK ("orders"."status" in ('pending-payment', 'abandoned', 'paid', 'picked-up', 'no-show', 'refunded', 'cancelled'));--> statement-breakpoint
 -- Backfill: attempts that ended unpaid were stored as 'cancelled'; they are 'abandoned' attempts now.
 UPDATE "orders" SET "status" = 'abandoned' WHERE "status" = 'cancelled' AND "paid_at" IS NULL;
 --> statement-breakpoint
