@@ -32,7 +32,9 @@ CREATE TABLE "sales_terms" (
 	CONSTRAINT "sales_terms_tax_range" CHECK ("sales_terms"."sales_tax_milli_percent" between 0 and 25000)
 );
 --> statement-breakpoint
+ALTER TABLE "order_lines" DROP CONSTRAINT "order_lines_total_adds_up";--> statement-breakpoint
 ALTER TABLE "orders" DROP CONSTRAINT "orders_status_known";--> statement-breakpoint
+ALTER TABLE "orders" DROP CONSTRAINT "orders_total_adds_up";--> statement-breakpoint
 ALTER TABLE "order_lines" ADD COLUMN "tax_cents" integer DEFAULT 0 NOT NULL;--> statement-breakpoint
 ALTER TABLE "orders" ADD COLUMN "tax_cents" integer DEFAULT 0 NOT NULL;--> statement-breakpoint
 ALTER TABLE "orders" ADD COLUMN "tax_exempt_certificate" text;--> statement-breakpoint
@@ -46,7 +48,9 @@ CREATE INDEX "refund_lines_line_idx" ON "refund_lines" USING btree ("order_line_
 CREATE UNIQUE INDEX "resale_certificates_one_per_buyer" ON "resale_certificates" USING btree ("buyer_id");--> statement-breakpoint
 CREATE INDEX "resale_certificates_status_idx" ON "resale_certificates" USING btree ("status");--> statement-breakpoint
 ALTER TABLE "orders" ADD CONSTRAINT "orders_checkout_session_id_unique" UNIQUE("checkout_session_id");--> statement-breakpoint
+ALTER TABLE "order_lines" ADD CONSTRAINT "order_lines_total_adds_up" CHECK ("order_lines"."total_cents" = "order_lines"."slab_cents" + "order_lines"."services_cents" + "order_lines"."tax_cents");--> statement-breakpoint
 ALTER TABLE "orders" ADD CONSTRAINT "orders_status_known" CHECK ("orders"."status" in ('pending-payment', 'abandoned', 'paid', 'picked-up', 'no-show', 'refunded', 'cancelled'));--> statement-breakpoint
+ALTER TABLE "orders" ADD CONSTRAINT "orders_total_adds_up" CHECK ("orders"."total_cents" = "orders"."slabs_cents" + "orders"."services_cents" + "orders"."tax_cents");--> statement-breakpoint
 -- Backfill: attempts that ended unpaid were stored as 'cancelled'; they are 'abandoned' attempts now.
 UPDATE "orders" SET "status" = 'abandoned' WHERE "status" = 'cancelled' AND "paid_at" IS NULL;
 --> statement-breakpoint
