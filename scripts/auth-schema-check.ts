@@ -21,7 +21,9 @@ const INTENDED: Record<string, string> = {
 const root = path.resolve(import.meta.dirname, '..');
 const outDir = fs.mkdtempSync(path.join(os.tmpdir(), 'auth-cli-'));
 const outFile = path.join(outDir, 'auth-generated.ts');
-execFileSync('npx', ['auth', 'generate', '--config', 'scripts/auth-cli-config.ts', '--output', outFile, '--yes'], {
+// The CLI (pinned) is fetched when this check runs: it declares Node 22, so as a dependency it would
+// make every `npm install` on Node 20 warn.
+execFileSync('npx', ['--yes', 'auth@1.7.7', 'generate', '--config', 'scripts/auth-cli-config.ts', '--output', outFile, '--yes'], {
   cwd: root,
   stdio: 'inherit',
   env: { ...process.env, NODE_OPTIONS: `${process.env.NODE_OPTIONS ?? ''} --import ${pathToFileURL(path.join(root, 'scripts/node20-groupby-polyfill.mjs')).href}` },

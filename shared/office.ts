@@ -40,9 +40,13 @@ export const auditQuerySchema = z.object({
 export const parseAuditQuery = (raw: Record<string, unknown>) => auditQuerySchema.parse(emptyToUndefined(raw));
 export type AuditQuery = z.infer<typeof auditQuerySchema>;
 
+/** What a change log entry was about, with where to look at it (a slab, order or log page). */
+export type AuditTarget = { label: string; link: { kind: 'slab' | 'order' | 'log' | 'office-order'; id: number } | null };
+
+/** One change, readable: who by name, what in words, on what, and when on the mill's clock. */
 export type AuditEntryView = {
-  id: number; actorEmail: string | null; action: string; entityType: string; entityId: string;
-  before: unknown; after: unknown; createdAt: string;
+  id: number; action: string; entityType: string; createdAt: string;
+  who: string; what: string; on: AuditTarget; whenAtMill: string;
 };
 export type AuditPage = { items: AuditEntryView[]; total: number; page: number; pageSize: number; actions: string[]; entityTypes: string[] };
 
@@ -140,4 +144,20 @@ export type MillNumbers = {
   soldSlabsWithMillDate: number;
   /** Slabs still drying, soonest expected air-dry date first (at most 200). */
   dryingStock: DryingStockForecast[];
+};
+
+/** The change log's filter choices in words (the stored action names stay internal). */
+export const AUDIT_ACTION_LABELS: Record<string, string> = {
+  'log.create': 'Log recorded', 'log.update': 'Log changed', 'slab.create': 'Slab recorded', 'slab.status': 'Slab status changed',
+  'slab.price': 'Price changed', 'slab.drying-state': 'Drying state changed', 'moisture-reading.create': 'Reading recorded',
+  'moisture-reading.delete': 'Reading deleted', 'slab-photo.add': 'Photos added', 'slab-photo.delete': 'Photo removed',
+  'matched-set.mark': 'Book-matched set marked', 'matched-set.unmark': 'Book-matched set unmarked',
+  'matched-set.rest-still-held': 'Slab left a held matched set', 'hold.release': 'Hold released by staff',
+  'order.paid': 'Order paid', 'order.picked-up': 'Picked up', 'order.no-show': 'No-show', 'order.reschedule': 'Pickup moved',
+  'order.refund': 'Refund', 'user.role': 'Role changed', 'user.disable': 'Account disabled', 'user.enable': 'Account enabled',
+  'mill-rules.update': 'Prices and rules saved', 'pickup-settings.update': 'Pickup hours changed', 'figure-kind.create': 'Figure added',
+};
+export const AUDIT_SUBJECT_LABELS: Record<string, string> = {
+  slab: 'Slabs', order: 'Orders', log: 'Logs', hold: 'Holds', user: 'Accounts', mill_settings: "The mill's settings",
+  figure_kind: 'Figure list', 'moisture-reading': 'Readings (older entries)',
 };

@@ -187,3 +187,24 @@ const round1 = (n: number) => Math.round(n * 10) / 10;
 
 /** The answer (409) when a reading needs the person's confirmation; resend with `confirmed: true`. */
 export const READING_JUMP_CODE = 'reading_needs_confirmation';
+
+// --- moisture rounds by stack -------------------------------------------------------------------
+
+/** Slabs still in the yard are read about once a month while they dry (common practice for air drying). */
+export const ROUND_EVERY_DAYS = 30;
+/** Statuses of slabs that still sit in a stack and are worth measuring. */
+export const ROUND_STATUSES = ['drying', 'ready', 'listed', 'held'] as const;
+
+export type YardStack = { stack: string; slabCount: number; oldestReadingOn: string | null; due: boolean };
+export type RoundSlab = { id: number; code: string; speciesName: string; yardPosition: string; lastMcPercent: number | null; lastReadingOn: string | null };
+export type MoistureRound = { stack: string; items: RoundSlab[] };
+
+/** A stack is due when one of its slabs has no reading, or its oldest latest reading is a round old. */
+export function isRoundDue(oldestReadingOn: string | null, hasUnread: boolean, today: string): boolean {
+  if (hasUnread || !oldestReadingOn) return true;
+  return (Date.parse(`${today}T00:00:00Z`) - Date.parse(`${oldestReadingOn}T00:00:00Z`)) / 86_400_000 >= ROUND_EVERY_DAYS;
+}
+
+/** Yard order within a stack: by position as written ("row 1, 3rd from top"), numbers compared as numbers. */
+export const byYardPosition = (a: { yardPosition: string; code: string }, b: { yardPosition: string; code: string }) =>
+  a.yardPosition.localeCompare(b.yardPosition, 'en', { numeric: true, sensitivity: 'base' }) || a.code.localeCompare(b.code, 'en', { numeric: true });

@@ -1,16 +1,46 @@
 import type { DryingForecast } from './wood/index';
 import { z } from 'zod';
+import { parseInches, WoodMathError } from './wood/index';
 import { LIVE_EDGE, SLAB_STATUSES, type SlabStatus } from './slabs';
 import { inchesInput } from './measure-input';
 
-export const DEFECT_KINDS = ['check', 'bark-inclusion', 'void', 'insect-holes', 'other'] as const;
-export const DEFECT_LABELS: Record<(typeof DEFECT_KINDS)[number], string> = {
+/** What a buyer should know about before cutting; the yard records where each one is. Trade terms. */
+export const DEFECT_KINDS = [
+  'knot', 'loose-knot', 'check', 'shake', 'wane', 'pith', 'rot', 'insect-holes', 'embedded-metal', 'bark-inclusion', 'void', 'other',
+] as const;
+export type DefectKind = (typeof DEFECT_KINDS)[number];
+export const DEFECT_LABELS: Record<DefectKind, string> = {
+  knot: 'Knot (sound)',
+  'loose-knot': 'Loose knot',
   check: 'Check (end or surface crack)',
+  shake: 'Shake (split along the growth rings)',
+  wane: 'Wane (bark or missing wood on an edge)',
+  pith: 'Pith (the tree’s centre)',
+  rot: 'Rot or soft spot',
+  'insect-holes': 'Insect holes',
+  'embedded-metal': 'Embedded metal (nail, wire, shot)',
   'bark-inclusion': 'Bark inclusion',
   void: 'Void',
-  'insect-holes': 'Insect holes',
   other: 'Other',
 };
+/** Which side of the slab a defect shows on. */
+export const DEFECT_FACES = ['top', 'bottom', 'edge', 'end', 'through'] as const;
+export type DefectFace = (typeof DEFECT_FACES)[number];
+export const DEFECT_FACE_LABELS: Record<DefectFace, string> = {
+  top: 'top face', bottom: 'bottom face', edge: 'edge', end: 'end', through: 'through both faces',
+};
+
+export type SlabDefectInput = { kind: DefectKind; note: string; fromButtIn?: number | null; face?: DefectFace | null };
+
+/** One defect in plain words, e.g. "Loose knot, top face, 34 in from the butt end — about 1 in across". */
+export function describeDefect(d: { kind: string; note: string; fromButtIn?: number | null; face?: string | null }, length: (inches: number) => string): string {
+  const label = (DEFECT_LABELS as Record<string, string>)[d.kind] ?? 'Other';
+  const parts = [label.replace(/ \(.*\)$/, '')];
+  if (d.face) parts.push((DEFECT_FACE_LABELS as Record<string, string>)[d.face] ?? '');
+  if (d.fromButtIn !== undefined && d.fromButtIn !== null) parts.push(`${length(d.fromButtIn)} from the butt end`);
+  const where = parts.filter(Boolean).join(', ');
+  return d.note ? `${where} — ${d.note}` : where;
+}
 
 export const SLAB_LIMITS = {
   minStations: 2, maxStations: 8, maxThicknessIn: 12, maxWidthIn: 120, maxLengthIn: 600,
@@ -68,6 +98,17 @@ export const YARD_STATUS_LABELS: Record<SlabStatus, string> = {
   withdrawn: 'Withdrawn',
 };
 
+/**
+ * Listing a slab that reads more than this many points of moisture content above the mill's target
+ * asks for a second "yes": furniture built from it will still shrink and may check. Stickerline's
+ * own threshold, not a trade rule.
+ */
+export const WET_LISTING_MARGIN_POINTS = 4;
+export const isWellAboveTarget = (mcPercent: number, targetMcPercent: number) => mcPercent > targetMcPercent + WET_LISTING_MARGIN_POINTS;
+export const wetListingMessage = (mcPercent: number, targetMcPercent: number) =>
+  `This slab last read ${mcPercent} % moisture content, well above the mill's target of ${targetMcPercent} %. `
+  + 'Furniture made from it may still shrink or check. Confirm to list it anyway.';
+
 /** Whether a seller or admin may move a slab from `from` to `to` by editing it. */
 export const canStaffMove = (from: SlabStatus, to: SlabStatus) => mayMoveSlab(from, to, 'yard');
 
@@ -81,9 +122,32 @@ const shortText = (label: string, max: number) => z.string().max(max, `${label}:
 export const figureSlugSchema = z.string().regex(/^[a-z][a-z0-9-]{0,39}$/, 'Use lower-case letters, digits and dashes');
 
 export const defectSchema = z.object({
-  kind: z.enum(DEFECT_KINDS, { error: `Defect kind must be one of ${DEFECT_KINDS.join(', ')}` }),
+  kind: z.enum(DEFECT_KINDS, { error: 'Choose the kind of defect from the list' }),
   note: shortText('Defect note', 300),
+  // Typed like every other size ("34", "34 1/2"); an empty box means "not measured".
+  fromButtIn: z.preprocess((value, ctx) => {
+    if (value === '' || value === undefined) return null;
+    if (typeof value !== 'string') return value;
+    try {
+      return parseInches(value);
+    } catch (e) {
+      ctx.addIssue({ code: 'custom', message: e instanceof WoodMathError ? e.message : 'That distance could not be read.' });
+      return value;
+    }
+  }, z.number({ error: 'Distance from the butt end must be a number of inches' })
+    .min(0, 'Distance from the butt end cannot be negative').max(SLAB_LIMITS.maxLengthIn, `Distance from the butt end must be at most ${SLAB_LIMITS.maxLengthIn} in`)
+    .nullable()).optional(),
+  face: z.enum(DEFECT_FACES, { error: 'Choose the face from the list' }).nullable().optional(),
 });
+
+/** A defect's distance from the butt end must fall on the slab. */
+export function defectsOffTheSlab(defects: { fromButtIn?: number | null }[] | undefined, lengthIn: number): Record<string, string[]> {
+  const out: Record<string, string[]> = {};
+  defects?.forEach((d, i) => {
+    if (d.fromButtIn != null && d.fromButtIn > lengthIn) out[`defects.${i}.fromButtIn`] = [`The slab is only ${lengthIn} in long`];
+  });
+  return out;
+}
 
 const slabFields = z.object({
   logId: z.number({ error: 'Choose the log this slab came from' }).int().positive('Choose the log this slab came from'),
@@ -123,7 +187,11 @@ export const createSlabSchema = slabFields
   .superRefine(checkOverride);
 
 export const updateSlabSchema = slabFields.omit({ logId: true }).partial()
-  .extend({ status: z.enum(SLAB_STATUSES, { error: `Status must be one of ${SLAB_STATUSES.join(', ')}` }).optional() })
+  .extend({
+    status: z.enum(SLAB_STATUSES, { error: `Status must be one of ${SLAB_STATUSES.join(', ')}` }).optional(),
+    /** The person saw the "well above target MC" warning and lists the slab anyway. */
+    confirmAboveTargetMc: z.literal(true, { error: 'Send true to confirm' }).optional(),
+  })
   .superRefine(checkOverride);
 
 export type CreateSlab = z.output<typeof createSlabSchema>;
@@ -192,6 +260,6 @@ export type YardSlabPage = { items: YardSlabRow[]; total: number; page: number; 
 
 /** A slab as the staff form edits it. */
 export type YardSlabDetail = YardSlabRow & {
-  figureNotes: string; defects: { kind: (typeof DEFECT_KINDS)[number]; note: string }[]; description: string;
+  figureNotes: string; defects: SlabDefectInput[]; description: string;
   priceOverrideReason: string | null; speciesRatePerBoardFootCents: number;
 };

@@ -151,7 +151,7 @@ export type SlabDetail = Omit<SlabListItem, 'species'> & {
   species: SpeciesRef & { botanicalName: string; ratePerBoardFootCents: number };
   widthsIn: number[];
   figureNotes: string;
-  defects: { kind: string; note: string }[];
+  defects: { kind: string; note: string; fromButtIn?: number | null; face?: string | null }[];
   description: string;
   yardStack: string;
   yardPosition: string;

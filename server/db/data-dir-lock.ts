@@ -99,8 +99,11 @@ function tryLock(dataDir: string, opts: LockOptions) {
  */
 async function takeOver(dataDir: string, dead: LockOwner, opts: LockOptions) {
   const mutex = `${lockPathOf(dataDir)}-takeover`;
-  const releaseMutex = await lockfile.lock(dataDir, {
+  // proper-lockfile keeps its locks by the locked path: the mutex gets a path of its own, or releasing
+  // it would end the folder lock taken inside it.
+  const releaseMutex = await lockfile.lock(mutex, {
     realpath: false, lockfilePath: mutex, stale: 5_000, retries: { retries: 20, minTimeout: 100, maxTimeout: 500 },
+    onCompromised: () => { /* a takeover lasts milliseconds; nothing to stop if it was cut short */ },
   });
   try {
     const now = readLockOwner(dataDir);

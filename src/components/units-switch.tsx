@@ -19,7 +19,7 @@ export function UnitsSwitch() {
             type="button"
             aria-pressed={units === u}
             title={UNIT_SYSTEM_LABELS[u]}
-            aria-label={UNIT_SYSTEM_LABELS[u]}
+            aria-label={`${SHORT[u]}: ${UNIT_SYSTEM_LABELS[u]}`}
             onClick={() => setUnits(u)}
             className={`min-h-11 px-3 font-semibold ${units === u ? 'bg-accent text-surface-raised' : 'bg-surface-raised text-ink hover:bg-surface-sunk'}`}
           >

@@ -1,11 +1,12 @@
 import { useState } from 'react';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
+import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { useQuery } from '@tanstack/react-query';
 import { queryClient } from '../lib/query-client';
 import { requireRoleLoader } from '../features/session/api';
 import { figureKindsQuery, logListQuery, yardSlabQuery } from '../features/yard/api';
 import { SlabForm } from '../features/yard/components/slab-form';
 import { FigureKindAdder } from '../features/yard/components/figure-kind-adder';
+import { DeleteRecord } from '../features/yard/components/delete-record';
 import { Notice } from '../components/ui/notice';
 import { PageTitle } from '../components/ui/page-title';
 import { paths } from '../paths';
@@ -23,7 +24,10 @@ export function Component() {
   const id = Number(useParams().slabId);
   const { data: slab } = useQuery(yardSlabQuery(id));
   const [saved, setSaved] = useState(false);
+  const navigate = useNavigate();
   if (!slab) return null;
+  // Only a slab no buyer ever saw may go; the server checks its whole history again.
+  const deletable = ['drying', 'ready', 'withdrawn'].includes(slab.status) && !slab.listedAt;
   return (
     <div className="mx-auto grid max-w-4xl gap-4">
       <nav aria-label="Slab pages" className="flex flex-wrap gap-4">
@@ -38,6 +42,10 @@ export function Component() {
       {/* key: a saved slab comes back with recomputed values; start the form again from them */}
       <SlabForm key={slab.updatedAt} slab={slab} onSaved={() => setSaved(true)} />
       <FigureKindAdder />
+      {deletable && (
+        <DeleteRecord kind="slab" id={id} code={slab.code}
+          onDeleted={(code) => navigate(paths.yardLog(slab.logId), { state: { notice: `Slab ${code} was deleted.` } })} />
+      )}
     </div>
   );
 }

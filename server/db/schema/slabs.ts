@@ -7,7 +7,7 @@ import { sql } from 'drizzle-orm';
 import { DRYING_STATE_VALUES, LIVE_EDGE, SLAB_STATUSES } from '../../../shared/slabs';
 import { cents, DB_LIMITS, oneOf, within } from './checks';
 
-export type SlabDefect = { kind: string; note: string };
+export type SlabDefect = { kind: string; note: string; fromButtIn?: number | null; face?: string | null };
 
 export const slabs = pgTable('slabs', {
   id: serial('id').primaryKey(),

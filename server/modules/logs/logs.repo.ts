@@ -65,3 +65,7 @@ export function isUniqueViolation(err: unknown, constraint?: string): boolean {
   }
   return false;
 }
+
+export async function deleteLogRow(db: Tx, id: number) {
+  await db.delete(logs).where(eq(logs.id, id));
+}

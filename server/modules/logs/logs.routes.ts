@@ -2,7 +2,7 @@ import { Router } from 'express';
 import type { Db } from '../../db/client';
 import { requireRole } from '../../lib/session';
 import { z } from 'zod';
-import { createLog, getLog, listLogs, nextLogCode, parseLogId, updateLog } from './logs.service';
+import { createLog, deleteLog, getLog, listLogs, nextLogCode, parseLogId, updateLog } from './logs.service';
 
 const nextCodeQuery = z.object({ felledOn: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Felled date must be a date (YYYY-MM-DD)').optional().or(z.literal('').transform(() => undefined)) });
 
@@ -24,7 +24,10 @@ export function logRoutes({ db }: { db: Db }) {
     res.json(await getLog(db, parseLogId(String(req.params.id))));
   });
   router.patch('/logs/:id', staff, async (req, res) => {
-    res.json(await updateLog(db, parseLogId(String(req.params.id)), req.body));
+    res.json(await updateLog(db, parseLogId(String(req.params.id)), req.body, req.user!));
+  });
+  router.delete('/logs/:id', staff, async (req, res) => {
+    res.json(await deleteLog(db, req.user!, parseLogId(String(req.params.id))));
   });
   return router;
 }

@@ -1,6 +1,7 @@
 import type { Db } from '../../db/client';
 import { AppError, notFound, validationError } from '../../lib/errors';
 import type { SessionUser } from '../../lib/session';
+import { recordAudit } from '../../lib/audit';
 import {
   createLogSchema, logCodeYear, logDateProblems, logFitsSlabs, nextLogCodeIn, updateLogSchema,
   type FieldProblems, type LogDetail, type LogSummary, type NextLogCode,
@@ -58,7 +59,7 @@ async function speciesIdFor(db: Db, slug: string) {
 const codeTaken = (code: string) =>
   new AppError(409, 'conflict', `Log code ${code} is already used.`, { code: [`${code} is already used by another log`] });
 
-export async function createLog(db: Db, raw: unknown, _actor: SessionUser, now = new Date()): Promise<LogDetail> {
+export async function createLog(db: Db, raw: unknown, actor: SessionUser, now = new Date()): Promise<LogDetail> {
   const input = createLogSchema.parse(raw);
   refuse(logDateProblems(input, millDay(now)));
   const speciesId = await speciesIdFor(db, input.speciesSlug);
@@ -68,9 +69,13 @@ export async function createLog(db: Db, raw: unknown, _actor: SessionUser, now =
   for (let attempt = 0; ; attempt++) {
     const code = input.code ?? (await nextLogCode(db, input.felledOn, now)).code;
     try {
-      const row = await repo.insertLog(db, {
-        ...rest, code, speciesId, originNote: rest.originNote ?? '', notes: rest.notes ?? '',
-        felledOn: rest.felledOn ?? null, milledOn: rest.milledOn ?? null,
+      const row = await db.transaction(async (tx) => {
+        const inserted = await repo.insertLog(tx, {
+          ...rest, code, speciesId, originNote: rest.originNote ?? '', notes: rest.notes ?? '',
+          felledOn: rest.felledOn ?? null, milledOn: rest.milledOn ?? null,
+        });
+        await recordAudit(tx, { actor, action: 'log.create', entityType: 'log', entityId: inserted.id, before: null, after: { code: inserted.code, speciesSlug: input.speciesSlug } });
+        return inserted;
       });
       return getLog(db, row.id);
     } catch (err) {
@@ -80,7 +85,7 @@ export async function createLog(db: Db, raw: unknown, _actor: SessionUser, now =
   }
 }
 
-export async function updateLog(db: Db, id: number, raw: unknown, now = new Date()): Promise<LogDetail> {
+export async function updateLog(db: Db, id: number, raw: unknown, actor: SessionUser | null = null, now = new Date()): Promise<LogDetail> {
   const input = updateLogSchema.parse(raw);
   refuse(logDateProblems(input, millDay(now)));
   const existing = await repo.findLog(db, id);
@@ -108,6 +113,31 @@ export async function updateLog(db: Db, id: number, raw: unknown, now = new Date
     const other = await repo.logCodeTaken(db, input.code);
     if (other && other !== id) throw codeTaken(input.code);
   }
-  if (Object.keys(values).length) await repo.updateLog(db, id, values);
+  if (Object.keys(values).length) {
+    await db.transaction(async (tx) => {
+      await repo.updateLog(tx, id, values);
+      const changed = Object.keys(input).filter((k) => (input as Record<string, unknown>)[k] !== (existing.log as Record<string, unknown>)[k]);
+      await recordAudit(tx, { actor, action: 'log.update', entityType: 'log', entityId: id, before: null, after: { fields: changed } });
+    });
+  }
   return getLog(db, id);
+}
+
+/** A log recorded by mistake can go while no slab has been recorded from it; the audit log keeps it. */
+export async function deleteLog(db: Db, actor: SessionUser, id: number) {
+  return db.transaction(async (tx) => {
+    const row = await repo.findLog(tx, id);
+    if (!row) throw notFound('That log');
+    const n = Number(row.slabCount);
+    if (n > 0) {
+      throw new AppError(409, 'not_deletable',
+        `Log ${row.log.code} cannot be deleted: ${n === 1 ? 'a slab was' : `${n} slabs were`} recorded from it. Delete ${n === 1 ? 'that slab' : 'those slabs'} first (only slabs never put on sale can be deleted).`);
+    }
+    await repo.deleteLogRow(tx, id);
+    await recordAudit(tx, {
+      actor, action: 'log.delete', entityType: 'log', entityId: id, after: null,
+      before: { code: row.log.code, species: row.speciesSlug, lengthIn: row.log.lengthIn, felledOn: row.log.felledOn, milledOn: row.log.milledOn },
+    });
+    return { deleted: row.log.code };
+  });
 }

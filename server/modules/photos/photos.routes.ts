@@ -48,7 +48,7 @@ export function photoRoutes({ db, uploadsDir }: { db: Db; uploadsDir: string }) 
   });
   router.post('/slabs/:id/photos', staff, receivePhotos, async (req, res) => {
     const files = Array.isArray(req.files) ? req.files : [];
-    res.status(201).json(await uploadPhotos(db, uploadsDir, slabId(req.params.id), files));
+    res.status(201).json(await uploadPhotos(db, uploadsDir, slabId(req.params.id), files, req.user!));
   });
   router.post('/slabs/:id/photos/order', staff, async (req, res) => {
     res.json(await reorderSlabPhotos(db, slabId(req.params.id), req.body));

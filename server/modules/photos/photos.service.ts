@@ -37,7 +37,7 @@ export async function listSlabPhotos(db: Db, slabId: number): Promise<YardPhotoL
  * Renders and stores each photo, then records them all in one transaction. Any failure removes
  * every file written for this request, so neither files nor rows are left behind.
  */
-export async function uploadPhotos(db: Db, uploadsDir: string, slabId: number, files: IncomingFile[]): Promise<YardPhotoList> {
+export async function uploadPhotos(db: Db, uploadsDir: string, slabId: number, files: IncomingFile[], actor: Pick<SessionUser, 'id' | 'email'> | null = null): Promise<YardPhotoList> {
   if (!files.length) throw validationError({ photos: ['Choose at least one photo to upload.'] }, 'No photos were sent.');
   if (!(await repo.slabExists(db, slabId))) throw notFound('That slab');
   // Early answer before the slow rendering; the binding check is repeated inside the transaction.
@@ -61,6 +61,7 @@ export async function uploadPhotos(db: Db, uploadsDir: string, slabId: number, f
       await repo.insertPhotos(tx, written.map((w, i) => ({
         slabId, fileKey: w.key, width: w.width, height: w.height, position: nextPosition + i, isCover: !hasCover && i === 0,
       })));
+      await recordAudit(tx, { actor, action: 'slab-photo.add', entityType: 'slab', entityId: slabId, before: null, after: { count: written.length } });
     });
   } catch (e) {
     await removeRenditions(uploadsDir, written.map((w) => w.key));

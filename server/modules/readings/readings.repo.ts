@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, inArray, lte } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, lte, ne, sql } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
 import { logs, millSettings, moistureReadings, slabs, species } from '../../db/schema/index';
 import { vouchedFor } from './reading-visibility';
@@ -79,4 +79,18 @@ export async function setDryingState(tx: Tx, slabId: number, dryingState: string
 export async function readTargetMcPercent(db: Tx): Promise<number> {
   const [row] = await db.select({ target: millSettings.targetMcPercent }).from(millSettings).where(eq(millSettings.id, 1));
   return row?.target ?? 8;
+}
+
+const lastReading = <T>(col: typeof moistureReadings.mcPercent | typeof moistureReadings.measuredOn) => sql<T>`(
+  select ${col} from ${moistureReadings} where ${moistureReadings.slabId} = ${slabs.id} and ${vouchedFor}
+  order by ${moistureReadings.measuredOn} desc, ${moistureReadings.id} desc limit 1)`;
+
+/** Slabs still in a stack, with their latest reading; `stack` narrows to one stack. */
+export function slabsInStacks(db: Tx, statuses: readonly string[], stack?: string) {
+  return db.select({
+    id: slabs.id, code: slabs.code, speciesName: species.name, yardStack: slabs.yardStack, yardPosition: slabs.yardPosition,
+    lastMcPercent: lastReading<number | null>(moistureReadings.mcPercent),
+    lastReadingOn: sql<string | null>`${lastReading(moistureReadings.measuredOn)}::text`,
+  }).from(slabs).innerJoin(species, eq(species.id, slabs.speciesId))
+    .where(and(inArray(slabs.status, [...statuses]), stack === undefined ? ne(slabs.yardStack, '') : eq(slabs.yardStack, stack)));
 }

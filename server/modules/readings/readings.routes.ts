@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { Db } from '../../db/client';
 import { requireRole } from '../../lib/session';
+import { listStacks, roundForStack } from './moisture-round.service';
 import { addBatch, addReading, listForSlab, parseId, removeReading } from './readings.service';
 
 const staff = requireRole('seller', 'admin');
@@ -19,6 +20,12 @@ export function readingRoutes({ db }: { db: Db }) {
   });
   router.delete('/moisture-readings/:id', staff, async (req, res) => {
     res.json(await removeReading(db, req.user!, parseId(req.params.id as string, 'That reading')));
+  });
+  router.get('/yard/stacks', staff, async (_req, res) => {
+    res.json({ items: await listStacks(db) });
+  });
+  router.get('/yard/moisture-round', staff, async (req, res) => {
+    res.json(await roundForStack(db, req.query.stack));
   });
   return router;
 }

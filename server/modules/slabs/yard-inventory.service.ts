@@ -6,7 +6,7 @@ import {
   bulkSlabActionSchema, createFigureKindSchema, yardSlabQuerySchema, type BulkResult, type YardSlabPage, type YardSlabRow,
 } from '../../../shared/slab-input';
 import { SLAB_STATUSES, type SlabStatus } from '../../../shared/slabs';
-import { assertPublishable, assertStaffMove } from './yard-slabs.workflow';
+import { assertDryEnoughOrConfirmed, assertPublishable, assertStaffMove } from './yard-slabs.workflow';
 import { withForecasts } from './yard-slabs.service';
 import * as repo from './yard-slabs.repo';
 import { moveEverySlab } from './slab-state';
@@ -68,7 +68,8 @@ export async function bulkSlabAction(db: Db, raw: unknown, actor: SessionUser): 
         const to: SlabStatus = input.action === 'list' ? 'listed' : 'withdrawn';
         if (from === to) return from;
         assertStaffMove(from, to);
-        if (to === 'listed') await assertPublishable(tx, id);
+        // A slab well above the target MC is listed only from its own page, where the warning is confirmed.
+        if (to === 'listed') { await assertPublishable(tx, id); await assertDryEnoughOrConfirmed(tx, id, false); }
         await moveEverySlab(tx, [id], to, 'yard');
         await recordAudit(tx, { actor, action: 'slab.status', entityType: 'slab', entityId: id, before: { status: from }, after: { status: to } });
         return to;

@@ -1,7 +1,7 @@
 import { and, asc, desc, eq, ilike, inArray, ne, or, sql, type SQL } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
 import { vouchedFor } from '../readings/reading-visibility';
-import { figureKinds, logs, moistureReadings, slabPhotos, slabs, species } from '../../db/schema/index';
+import { figureKinds, holds, logs, moistureReadings, orderLines, slabPhotos, slabs, species } from '../../db/schema/index';
 import type { YardSlabQuery, YardSort } from '../../../shared/slab-input';
 
 const latestReading = <T>(col: typeof moistureReadings.mcPercent | typeof moistureReadings.measuredOn) => sql<T>`(
@@ -142,4 +142,21 @@ export const listFigureKinds = (db: Tx) => db.select().from(figureKinds).orderBy
 export async function insertFigureKind(tx: Tx, values: typeof figureKinds.$inferInsert) {
   const [row] = await tx.insert(figureKinds).values(values).onConflictDoNothing().returning();
   return row ?? null;
+}
+
+/** What ties a slab to buyers: any hold ever placed and any order line ever written. */
+export async function buyerTraces(tx: Tx, slabId: number) {
+  const [row] = await tx.select({
+    holds: sql<number>`(select count(*)::int from ${holds} where ${holds.slabId} = ${slabId})`,
+    lines: sql<number>`(select count(*)::int from ${orderLines} where ${orderLines.slabId} = ${slabId})`,
+  }).from(sql`(select 1) as one`);
+  return { holds: Number(row?.holds ?? 0), lines: Number(row?.lines ?? 0) };
+}
+
+export async function photoKeysOf(tx: Tx, slabId: number) {
+  return (await tx.select({ key: slabPhotos.fileKey }).from(slabPhotos).where(eq(slabPhotos.slabId, slabId))).map((r) => r.key);
+}
+
+export async function deleteSlabRow(tx: Tx, id: number) {
+  await tx.delete(slabs).where(eq(slabs.id, id));
 }

@@ -5,9 +5,10 @@ import { parseId } from './catalogue.service';
 import { createSlab, getYardSlab, updateSlab } from './yard-slabs.service';
 import { addFigureKind, bulkSlabAction, listFigureKinds, listYardSlabs, yardSlabsForExport } from './yard-inventory.service';
 import { yardSlabsCsv } from './yard-csv';
+import { deleteSlab } from './slab-removal';
 
 /** The yard desk's slab routes: recording, editing, the inventory list and its CSV. Staff only, except reading figure kinds. */
-export function yardSlabRoutes({ db }: { db: Db }) {
+export function yardSlabRoutes({ db, uploadsDir }: { db: Db; uploadsDir: string }) {
   const router = Router();
   const staff = requireRole('seller', 'admin');
   router.post('/slabs', staff, async (req, res) => {
@@ -15,6 +16,9 @@ export function yardSlabRoutes({ db }: { db: Db }) {
   });
   router.patch('/slabs/:id', staff, async (req, res) => {
     res.json(await updateSlab(db, parseId(String(req.params.id)), req.body, req.user!));
+  });
+  router.delete('/slabs/:id', staff, async (req, res) => {
+    res.json(await deleteSlab(db, uploadsDir, req.user!, parseId(String(req.params.id))));
   });
   router.get('/yard/slabs', staff, async (req, res) => {
     res.json(await listYardSlabs(db, req.query as Record<string, unknown>));

@@ -3,13 +3,13 @@ import { AppError, notFound, validationError } from '../../lib/errors';
 import { recordAudit } from '../../lib/audit';
 import type { SessionUser } from '../../lib/session';
 import { dryingStateFor, roundBoardFeet } from '../../../shared/wood/index';
-import { createSlabSchema, updateSlabSchema, type YardSlabDetail, type YardSlabRow } from '../../../shared/slab-input';
+import { createSlabSchema, defectsOffTheSlab, updateSlabSchema, type YardSlabDetail, type YardSlabRow } from '../../../shared/slab-input';
 import { isSold, type SlabStatus } from '../../../shared/slabs';
 import { loadPricingRules } from '../pricing/pricing.service';
 import { readMillSettings } from '../pricing/pricing.repo';
 import { isUniqueViolation } from '../logs/logs.repo';
 import { derivedSlabColumns } from './slab-derived';
-import { assertPublishable, assertStaffMove } from './yard-slabs.workflow';
+import { assertDryEnoughOrConfirmed, assertPublishable, assertStaffMove } from './yard-slabs.workflow';
 import * as repo from './yard-slabs.repo';
 import { forecastAirDry } from './drying-forecast';
 import { moveEverySlab, startingStatus } from './slab-state';
@@ -93,6 +93,8 @@ export async function createSlab(db: Db, raw: unknown, actor: SessionUser): Prom
     const found = await repo.findLogWithRate(tx, input.logId);
     if (!found) throw validationError({ logId: ['No log with this id. Record the log first.'] });
     await assertFiguresExist(tx, input.figures);
+    const offSlab = defectsOffTheSlab(input.defects, input.lengthIn);
+    if (Object.keys(offSlab).length) throw validationError(offSlab);
     const seq = input.sequenceInLog ?? (await repo.nextSequence(tx, input.logId));
     const owner = await repo.sequenceOwner(tx, input.logId, seq);
     if (owner) throw sequenceTaken(seq, owner.code);
@@ -130,8 +132,14 @@ export async function updateSlab(db: Db, id: number, raw: unknown, actor: Sessio
     const from = slab.status as SlabStatus;
     const to = input.status ?? from;
     assertStaffMove(from, to);
-    if (to === 'listed' && from !== 'listed') await assertPublishable(tx, id);
+    let confirmedWetMc: number | null = null;
+    if (to === 'listed' && from !== 'listed') {
+      await assertPublishable(tx, id);
+      confirmedWetMc = await assertDryEnoughOrConfirmed(tx, id, input.confirmAboveTargetMc === true);
+    }
     await assertFiguresExist(tx, input.figures);
+    const offSlab = defectsOffTheSlab(input.defects ?? slab.defects, input.lengthIn ?? slab.lengthIn);
+    if (Object.keys(offSlab).length) throw validationError(offSlab);
     if (input.sequenceInLog !== undefined && input.sequenceInLog !== slab.sequenceInLog) {
       const owner = await repo.sequenceOwner(tx, slab.logId, input.sequenceInLog, id);
       if (owner) throw sequenceTaken(input.sequenceInLog, owner.code);
@@ -150,14 +158,17 @@ export async function updateSlab(db: Db, id: number, raw: unknown, actor: Sessio
     const worked = derivedSlabColumns({ ...measures, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason }, await repo.speciesRate(tx, slab.speciesId), await loadPricingRules(tx));
     // A sold slab keeps the price it sold at, whatever is corrected on its record afterwards.
     const derived = isSold(from) ? { ...worked, priceCents: slab.priceCents } : worked;
-    const { status: _s, priceOverrideCents: _c, priceOverrideReason: _r, ...rest } = input;
+    const { status: _s, priceOverrideCents: _c, priceOverrideReason: _r, confirmAboveTargetMc: _w, ...rest } = input;
     const after = await repo.updateSlab(tx, id, {
       ...rest, ...measures, ...derived, priceOverrideCents: overrideCents, priceOverrideReason: overrideReason,
       dryingState: await dryingStateOf(tx, id),
     });
     if (from !== to) {
       await moveEverySlab(tx, [id], to, 'yard');
-      await recordAudit(tx, { actor, action: 'slab.status', entityType: 'slab', entityId: id, before: { status: from }, after: { status: to } });
+      await recordAudit(tx, {
+        actor, action: 'slab.status', entityType: 'slab', entityId: id, before: { status: from },
+        after: { status: to, ...(confirmedWetMc !== null ? { listedAboveTargetMcPercent: confirmedWetMc } : {}) },
+      });
     }
     if (after.priceCents !== slab.priceCents || after.priceOverrideCents !== slab.priceOverrideCents || after.priceOverrideReason !== slab.priceOverrideReason) {
       await recordAudit(tx, { actor, action: 'slab.price', entityType: 'slab', entityId: id, before: money(slab), after: money(after) });

@@ -1,7 +1,7 @@
 import type { Tx } from '../../db/client';
 import { AppError } from '../../lib/errors';
 import { readMillSettings } from '../pricing/pricing.repo';
-import { canStaffMove, SLAB_TRANSITIONS, YARD_STATUS_LABELS as STATUS_LABELS } from '../../../shared/slab-input';
+import { canStaffMove, isWellAboveTarget, SLAB_TRANSITIONS, wetListingMessage, YARD_STATUS_LABELS as STATUS_LABELS } from '../../../shared/slab-input';
 import type { SlabStatus } from '../../../shared/slabs';
 import * as repo from './yard-slabs.repo';
 
@@ -40,4 +40,17 @@ export async function assertPublishable(tx: Tx, slabId: number, now = new Date()
     const message = `To list this slab for sale it needs ${missing.join(' and ')}.`;
     throw new AppError(409, 'not_ready_to_list', message, { status: [message] });
   }
+}
+
+/**
+ * Listing a slab well above the mill's target MC needs a second "yes". Returns the reading that was
+ * confirmed (for the audit record), or null when no confirmation was needed.
+ */
+export async function assertDryEnoughOrConfirmed(tx: Tx, slabId: number, confirmed: boolean): Promise<number | null> {
+  const [reading, settings] = await Promise.all([repo.latestReadingOf(tx, slabId), readMillSettings(tx)]);
+  const target = settings?.targetMcPercent ?? 8;
+  if (!reading || !isWellAboveTarget(reading.mcPercent, target)) return null;
+  if (confirmed) return reading.mcPercent;
+  const message = wetListingMessage(reading.mcPercent, target);
+  throw new AppError(409, 'confirm_wet_listing', message, { status: [message] });
 }

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '../../lib/api-client';
-import type { BatchReadingsInput, CreateReadingInput, ReadingSaved, SlabReadings } from '../../../shared/readings';
+import type { BatchReadingsInput, CreateReadingInput, MoistureRound, ReadingSaved, SlabReadings, YardStack } from '../../../shared/readings';
 
 export const readingKeys = {
   all: ['yard-readings'] as const,
@@ -25,6 +25,7 @@ function useRefresh() {
       void qc.invalidateQueries({ queryKey: readingKeys.slabDetail(id) });
     }
     void qc.invalidateQueries({ queryKey: readingKeys.slabLists });
+    void qc.invalidateQueries({ queryKey: [...readingKeys.all, 'stacks'] });
   };
 }
 
@@ -51,3 +52,12 @@ export function useDeleteReading(slabId: number) {
     onSuccess: () => refresh([slabId]),
   });
 }
+
+export const stacksQuery = () =>
+  queryOptions({
+    queryKey: [...readingKeys.all, 'stacks'] as const,
+    queryFn: async () => (await apiFetch<{ items: YardStack[] }>('/api/yard/stacks')).items,
+  });
+
+/** The slabs of one stack in walking order, fetched when the person starts a round there. */
+export const fetchRound = (stack: string) => apiFetch<MoistureRound>('/api/yard/moisture-round', { query: { stack } });

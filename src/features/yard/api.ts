@@ -134,3 +134,15 @@ export function useAddFigureKind() {
     onSuccess: () => qc.invalidateQueries({ queryKey: yardKeys.figureKinds() }),
   });
 }
+
+/** Removes a slab or log recorded by mistake; the server refuses anything a buyer ever saw. */
+export function useDeleteRecord(kind: 'slab' | 'log') {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (id: number) => apiFetch<{ deleted: string }>(kind === 'slab' ? `/api/slabs/${id}` : `/api/logs/${id}`, { method: 'DELETE' }),
+    onSuccess: () => {
+      void qc.invalidateQueries({ queryKey: yardKeys.all });
+      void qc.invalidateQueries({ queryKey: ['slabs'] });
+    },
+  });
+}

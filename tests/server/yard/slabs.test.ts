@@ -69,7 +69,7 @@ describe('POST /api/slabs', () => {
     [{ priceOverrideCents: 50000 }, 'priceOverrideReason'],
     [{ logId: 999999 }, 'logId'],
     [{ status: 'listed' }, 'status'],
-    [{ defects: [{ kind: 'rot', note: '' }] }, 'defects.0.kind'],
+    [{ defects: [{ kind: 'mould', note: '' }] }, 'defects.0.kind'],
   ])('answers 400 with a field error for %o and saves nothing', async (over, field) => {
     const before = (await t.db.select().from(slabs)).length;
     const res = await post({ ...slabBody(), ...over });

@@ -8,36 +8,35 @@ import { friendlyMessage } from '../../../lib/api-client';
 import { paths } from '../../../paths';
 import { MAX_COMPARE } from '../../../../shared/buyer-lists';
 import { LIVE_EDGE_LABELS, priceWords, STATUS_LABELS, type SlabDetail } from '../../../../shared/slabs';
-import { DRYING_STATES, formatCents, toSixteenths } from '../../../../shared/wood/index';
-import { DEFECT_LABELS } from '../../../../shared/slab-input';
+import { DRYING_STATES, formatCents } from '../../../../shared/wood/index';
+import { useMeasures } from '../../../lib/units';
+import { describeDefect } from '../../../../shared/slab-input';
 import { compareQuery, useCompareList } from '../api';
 
-const defectLabel = (kind: string) => (DEFECT_LABELS as Record<string, string>)[kind] ?? 'Other';
-
-type Row = { label: string; cell: (s: SlabDetail) => ReactNode };
-
-const inches = (n: number) => `${toSixteenths(n)}″`;
+type Measures = ReturnType<typeof useMeasures>;
+type Row = { label: string; cell: (s: SlabDetail, m: Measures) => ReactNode };
 
 const ROWS: Row[] = [
   { label: 'Price', cell: (s) => <strong>{priceWords(s.status, s.priceBreakdown?.totalCents ?? s.priceCents, formatCents)}</strong> },
   { label: 'Availability', cell: (s) => STATUS_LABELS[s.status] },
-  { label: 'Thickness', cell: (s) => inches(s.thicknessIn) },
-  { label: 'Average width', cell: (s) => inches(s.widthIn) },
-  { label: 'Length', cell: (s) => inches(s.lengthIn) },
-  { label: 'Board feet', cell: (s) => s.boardFeet.toFixed(2) },
+  { label: 'Thickness', cell: (s, m) => m.length(s.thicknessIn) },
+  { label: 'Average width', cell: (s, m) => m.length(s.widthIn) },
+  { label: 'Length', cell: (s, m) => m.longLength(s.lengthIn) },
+  { label: 'Board feet', cell: (s, m) => m.boardFeet(s.boardFeet) },
   { label: 'Price per board foot', cell: (s) => (s.priceBreakdown ? formatCents(Math.round(s.priceBreakdown.slabCents / Math.max(s.boardFeet, 0.01))) : '—') },
-  { label: 'Weight (estimate)', cell: (s) => `about ${s.weightLb} lb at ${s.weightAtMcPercent} % MC` },
+  { label: 'Weight (estimate)', cell: (s, m) => `about ${m.weight(s.weightLb)} at ${s.weightAtMcPercent} % MC` },
   { label: 'Moisture content', cell: (s) => (s.moisturePercent === null ? 'No reading yet' : `${s.moisturePercent} % (target ${s.targetMcPercent} %)`) },
   { label: 'Drying', cell: (s) => DRYING_STATES.find((d) => d.state === s.dryingState)?.label ?? s.dryingState },
   { label: 'Edges', cell: (s) => LIVE_EDGE_LABELS[s.liveEdge] },
   { label: 'Figure', cell: (s) => (s.figures.length ? s.figures.join(', ') : 'Plain') },
-  { label: 'Defects noted', cell: (s) => (s.defects.length ? s.defects.map((d) => defectLabel(d.kind)).join(', ') : 'None') },
+  { label: 'Defects noted', cell: (s, m) => (s.defects.length ? s.defects.map((d) => describeDefect(d, m.length)).join('; ') : 'None') },
   { label: 'From log', cell: (s) => `${s.log.code}, slab ${s.sequenceInLog}` },
 ];
 
 /** Up to four slabs side by side: one column a slab, one row a measure, so differences line up. */
 export function ComparePage() {
   const list = useCompareList();
+  const m = useMeasures();
   const { data, error, isPending } = useQuery(compareQuery(list.ids));
   const items = data?.items ?? [];
 
@@ -80,7 +79,7 @@ export function ComparePage() {
                 {ROWS.map((row) => (
                   <tr key={row.label} className="border-t border-line">
                     <th scope="row" className="p-2 text-sm font-semibold text-ink-soft">{row.label}</th>
-                    {items.map((s) => <td key={s.id} className="p-2">{row.cell(s)}</td>)}
+                    {items.map((s) => <td key={s.id} className="p-2">{row.cell(s, m)}</td>)}
                   </tr>
                 ))}
               </tbody>

@@ -8,7 +8,8 @@ import { Tag } from '../../../components/ui/tag';
 import { friendlyMessage } from '../../../lib/api-client';
 import { paths } from '../../../paths';
 import { priceWords, STATUS_LABELS } from '../../../../shared/slabs';
-import { formatCents, toSixteenths } from '../../../../shared/wood/index';
+import { formatCents } from '../../../../shared/wood/index';
+import { BoardFeet, Dimensions } from '../../../lib/units';
 import { savedSlabsQuery, useCompareList, useUnsaveSlab } from '../api';
 
 /** The slabs a buyer saved, with their state today; from here they can compare or let one go. */
@@ -30,7 +31,7 @@ export function SavedSlabsPage() {
               {s.coverThumbUrl && <img src={s.coverThumbUrl} alt="" className="h-16 w-24 rounded object-cover" />}
               <div className="min-w-40 flex-1">
                 <Link to={paths.slab(s.id)} className="font-semibold text-accent underline">{s.species.name} slab {s.code}</Link>
-                <p className="text-sm text-ink-soft">{toSixteenths(s.thicknessIn)}″ × {toSixteenths(s.widthIn)}″ × {toSixteenths(s.lengthIn)}″ · {s.boardFeet} bd ft</p>
+                <p className="text-sm text-ink-soft"><Dimensions of={s} /> · <BoardFeet value={s.boardFeet} /></p>
                 <Tag tone={s.status === 'listed' ? 'moss' : s.status === 'held' ? 'caution' : 'neutral'}>{STATUS_LABELS[s.status]}</Tag>
               </div>
               <p className="font-bold">{priceWords(s.status, s.priceCents, formatCents)}</p>

@@ -1,5 +1,6 @@
 import type { SlabDetail } from '../../../../shared/slabs';
 import { LIVE_EDGE_LABELS } from '../../../../shared/slabs';
+import { describeDefect } from '../../../../shared/slab-input';
 import { useMeasures } from '../../../lib/units';
 
 export function MeasurementsTable({ slab }: { slab: SlabDetail }) {
@@ -12,7 +13,7 @@ export function MeasurementsTable({ slab }: { slab: SlabDetail }) {
     ['Board feet', `${m.boardFeet(slab.boardFeet)} (thickness × average width × length ÷ 144, in inches)`],
     ['Edges', LIVE_EDGE_LABELS[slab.liveEdge]],
     ['Figure', slab.figures.length ? `${slab.figures.join(', ')}${slab.figureNotes ? ` — ${slab.figureNotes}` : ''}` : slab.figureNotes || 'Plain'],
-    ['Defects', slab.defects.length ? slab.defects.map((d) => `${d.kind}${d.note ? ` (${d.note})` : ''}`).join('; ') : 'None noted'],
+    ['Defects', slab.defects.length ? slab.defects.map((d) => describeDefect(d, m.length)).join('; ') : 'None noted'],
     ['In the yard', [slab.yardStack, slab.yardPosition].filter(Boolean).join(', ') || '—'],
   ];
   return (

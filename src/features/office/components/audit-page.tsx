@@ -5,6 +5,7 @@ import { SelectField, TextField } from '../../../components/ui/field';
 import { Button } from '../../../components/ui/button';
 import { paths } from '../../../paths';
 import { auditQuery, type AuditFilters } from '../api';
+import { AUDIT_ACTION_LABELS, AUDIT_SUBJECT_LABELS, type AuditTarget } from '../../../../shared/office';
 
 /** Filters live in the URL, so a filtered view can be bookmarked or sent to a colleague. */
 export function auditFiltersFrom(params: URLSearchParams): AuditFilters {
@@ -13,7 +14,12 @@ export function auditFiltersFrom(params: URLSearchParams): AuditFilters {
   return { actor: get('actor'), action: get('action'), entityType: get('entityType'), from: get('from'), to: get('to'), page: Number.isInteger(page) && page > 1 ? page : undefined };
 }
 
-const show = (v: unknown) => (v === null || v === undefined ? '—' : JSON.stringify(v, null, 1));
+const targetPath = (link: AuditTarget['link']) => {
+  if (!link) return null;
+  if (link.kind === 'slab') return paths.slab(link.id);
+  if (link.kind === 'log') return paths.yardLog(link.id);
+  return paths.officeOrder(link.id);
+};
 
 export function AuditPage() {
   const [params] = useSearchParams();
@@ -25,16 +31,16 @@ export function AuditPage() {
   return (
     <div className="flex flex-col gap-4">
       <PageTitle>Change log</PageTitle>
-      <p className="text-ink-soft">Every change of money, order state and roles made by staff, newest first.</p>
+      <p className="text-ink-soft">Every change to logs, slabs, photos, readings, prices, holds, orders and accounts, newest first. Times are the mill's.</p>
       <Form method="get" className="grid gap-3 sm:grid-cols-3 lg:grid-cols-6 lg:items-end">
         <TextField label="Who (e-mail)" name="actor" defaultValue={filters.actor} />
         <SelectField label="What" name="action" defaultValue={filters.action ?? ''}>
           <option value="">Anything</option>
-          {data?.actions.map((a) => <option key={a} value={a}>{a}</option>)}
+          {data?.actions.map((a) => <option key={a} value={a}>{AUDIT_ACTION_LABELS[a] ?? a.replace(/[.-]/g, ' ')}</option>)}
         </SelectField>
         <SelectField label="On" name="entityType" defaultValue={filters.entityType ?? ''}>
           <option value="">Any kind</option>
-          {data?.entityTypes.map((a) => <option key={a} value={a}>{a}</option>)}
+          {data?.entityTypes.map((a) => <option key={a} value={a}>{AUDIT_SUBJECT_LABELS[a] ?? a.replace(/[_-]/g, ' ')}</option>)}
         </SelectField>
         <TextField label="From" type="date" name="from" defaultValue={filters.from} />
         <TextField label="To" type="date" name="to" defaultValue={filters.to} />
@@ -44,14 +50,11 @@ export function AuditPage() {
       <ol className="flex flex-col gap-2">
         {data?.items.map((e) => (
           <li key={e.id} className="rounded-md border border-line bg-surface-raised p-3 text-sm">
-            <p><span className="font-semibold">{e.action}</span> on {e.entityType} {e.entityId} · {e.actorEmail ?? 'the system'} · {new Date(e.createdAt).toLocaleString()}</p>
-            <details className="mt-1">
-              <summary className="cursor-pointer text-accent">Before and after</summary>
-              <div className="mt-1 grid gap-2 sm:grid-cols-2">
-                <pre className="overflow-x-auto whitespace-pre-wrap rounded bg-surface-sunk p-2">{show(e.before)}</pre>
-                <pre className="overflow-x-auto whitespace-pre-wrap rounded bg-surface-sunk p-2">{show(e.after)}</pre>
-              </div>
-            </details>
+            <p>
+              <span className="font-semibold">{e.who}</span> · {e.what} · on{' '}
+              {(() => { const to = targetPath(e.on.link); return to ? <Link to={to} className="text-accent underline">{e.on.label}</Link> : e.on.label; })()}
+            </p>
+            <p className="text-ink-soft"><time dateTime={e.createdAt}>{e.whenAtMill}</time></p>
           </li>
         ))}
       </ol>

@@ -5,12 +5,14 @@ import { SelectField, TextField } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
 import { ApiError, friendlyMessage } from '../../../lib/api-client';
 import {
-  batchReadingsSchema, BATCH_MAX_ROWS, METER_KIND_LABELS, METER_KINDS, READING_JUMP_CODE, type BatchReadingsInput, type MeterKind, type ReadingSaved,
+  batchReadingsSchema, BATCH_MAX_ROWS, METER_KIND_LABELS, METER_KINDS, READING_JUMP_CODE, type BatchReadingsInput, type MeterKind, type ReadingSaved, type RoundSlab,
 } from '../../../../shared/readings';
 import { useBatchReadings } from '../api';
 import { dryingSummary, localToday } from './drying-words';
+import { StackPicker } from './stack-picker';
 
-type Row = { slabCode: string; mcPercent: string; location: string };
+/** `hint` (where the slab sits, its last reading) comes with a round started from a stack; it is not sent. */
+type Row = { slabCode: string; mcPercent: string; location: string; hint?: string };
 type Values = { measuredOn: string; meterKind: MeterKind; rows: Row[] };
 const blankRow = (): Row => ({ slabCode: '', mcPercent: '', location: '' });
 const ROW_FIELDS = ['slabCode', 'mcPercent', 'location'] as const;
@@ -29,6 +31,19 @@ export function BatchReadings() {
     defaultValues: { measuredOn: localToday(), meterKind: 'pin', rows: [blankRow()] },
   });
   const rows = useFieldArray({ control, name: 'rows' });
+  const [roundOf, setRoundOf] = useState<string | null>(null);
+
+  /** Replaces the rows with the stack's slabs, in yard order, with the MC boxes empty. */
+  function startRound(stack: string, slabs: RoundSlab[]) {
+    const round = slabs.slice(0, BATCH_MAX_ROWS).map((s) => ({
+      slabCode: s.code, mcPercent: '', location: '',
+      hint: [s.yardPosition, s.speciesName, s.lastMcPercent !== null ? `last ${s.lastMcPercent} % on ${s.lastReadingOn}` : 'no reading yet'].filter(Boolean).join(' · '),
+    }));
+    reset({ measuredOn: getValues('measuredOn'), meterKind: getValues('meterKind'), rows: round });
+    setRoundOf(stack);
+    setSaved(null);
+    focus('rows.0.mcPercent');
+  }
 
   const focus = (name: string) => requestAnimationFrame(() => formRef.current?.querySelector<HTMLInputElement>(`[name="${name}"]`)?.focus());
   const addRow = () => { rows.append(blankRow(), { shouldFocus: false }); focus(`rows.${rows.fields.length}.slabCode`); };
@@ -49,6 +64,7 @@ export function BatchReadings() {
     try {
       const res = await save.mutateAsync(body);
       setJumps(null);
+      setRoundOf(null);
       setSaved(res.items);
       reset({ measuredOn, meterKind, rows: [blankRow()] });
       focus('rows.0.slabCode');
@@ -88,6 +104,8 @@ export function BatchReadings() {
   const big = 'text-lg';
   return (
     <form ref={formRef} onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+      <StackPicker onStart={startRound} />
+      {roundOf && <p role="status" className="font-semibold">Round of stack {roundOf}: {rows.fields.length} slab{rows.fields.length === 1 ? '' : 's'} in yard order. Fill in each MC.</p>}
       <div className="grid grid-cols-2 gap-3">
         <TextField label="Date measured" type="date" max={localToday()} className={big} {...register('measuredOn')} error={errors.measuredOn?.message} />
         <SelectField label="Meter" className={big} {...register('meterKind')} error={errors.meterKind?.message}>
@@ -98,7 +116,7 @@ export function BatchReadings() {
         {rows.fields.map((field, i) => (
           <li key={field.id} className="rounded-md border border-line bg-surface-raised p-3">
             <fieldset className="grid grid-cols-2 gap-3 sm:grid-cols-[2fr_1fr_2fr_auto] sm:items-end">
-              <legend className="mb-1 text-sm font-semibold text-ink-soft">Slab {i + 1}</legend>
+              <legend className="mb-1 text-sm font-semibold text-ink-soft">Slab {i + 1}{field.hint ? ` — ${field.hint}` : ''}</legend>
               <TextField label="Slab code" autoCapitalize="characters" autoComplete="off" spellCheck={false} enterKeyHint="next"
                 className={big} {...register(`rows.${i}.slabCode`)} error={errors.rows?.[i]?.slabCode?.message}
                 onKeyDown={onEnter(() => focus(`rows.${i}.mcPercent`))} />

@@ -1,4 +1,4 @@
-import { Link } from 'react-router';
+import { Link, useLocation, useNavigate } from 'react-router';
 import { useQuery } from '@tanstack/react-query';
 import { SAWING_METHOD_LABELS } from '../../../../shared/slabs';
 import { YARD_STATUS_LABELS } from '../../../../shared/slab-input';
@@ -11,14 +11,19 @@ import { paths } from '../../../paths';
 import { logDetailQuery } from '../api';
 import { CutPlanPanel } from './cut-plan-panel';
 import { LogForm } from './log-form';
+import { DeleteRecord } from './delete-record';
+import { Notice } from '../../../components/ui/notice';
 import { MatchedSetsPanel } from './matched-sets-panel';
 
 
 export function LogPage({ id }: { id: number }) {
   const { data: log } = useQuery(logDetailQuery(id));
+  const navigate = useNavigate();
+  const notice = (useLocation().state as { notice?: string } | null)?.notice;
   if (!log) return null;
   return (
     <div className="grid gap-6">
+      {notice && <Notice tone="success" role="status">{notice}</Notice>}
       <div className="flex flex-wrap items-center justify-between gap-2">
         <PageTitle title={`Log ${log.code}`}>Log {log.code} · {log.species.name}</PageTitle>
         <Link to={paths.yardSlabNew({ logId: log.id })} className={buttonClass('primary')}>Add slab to this log</Link>
@@ -60,6 +65,9 @@ export function LogPage({ id }: { id: number }) {
         <summary className="cursor-pointer font-semibold">Edit log details</summary>
         <div className="mt-4"><LogForm log={log} onSaved={() => undefined} /></div>
       </details>
+      {log.slabs.length === 0 && (
+        <DeleteRecord kind="log" id={log.id} code={log.code} onDeleted={() => navigate(paths.yardLogs())} />
+      )}
     </div>
   );
 }

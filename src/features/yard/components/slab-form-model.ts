@@ -1,6 +1,6 @@
 import type { FieldErrors, Resolver } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { createSlabSchema, updateSlabSchema, type CreateSlab, type UpdateSlab, type YardSlabDetail } from '../../../../shared/slab-input';
+import { createSlabSchema, updateSlabSchema, type CreateSlab, type DefectFace, type DefectKind, type UpdateSlab, type YardSlabDetail } from '../../../../shared/slab-input';
 import type { SlabStatus } from '../../../../shared/slabs';
 import { inchesForInput } from '../../../../shared/wood/index';
 
@@ -18,7 +18,8 @@ export type SlabFormValues = {
   liveEdge: 'none' | 'one' | 'both';
   figures: string[];
   figureNotes: string;
-  defects: { kind: 'check' | 'bark-inclusion' | 'void' | 'insect-holes' | 'other'; note: string }[];
+  /** Distance from the butt end as typed (text, like every size box); face '' = not said. */
+  defects: { kind: DefectKind; note: string; fromButtIn: string; face: DefectFace | '' }[];
   yardStack: string;
   yardPosition: string;
   priceOverrideDollars: string;
@@ -39,6 +40,7 @@ export function toApi(v: SlabFormValues, isNew: boolean): Record<string, unknown
     ...(isNew ? { logId } : {}),
     sequenceInLog: Number.isNaN(v.sequenceInLog) ? undefined : v.sequenceInLog,
     widthsIn: widths.map((w) => w.value),
+    defects: v.defects.map((d) => ({ kind: d.kind, note: d.note, fromButtIn: d.fromButtIn, face: d.face || null })),
     // A lone checkbox reports its value or false rather than a list.
     figures: Array.isArray(v.figures) ? v.figures : typeof v.figures === 'string' ? [v.figures] : [],
     priceOverrideCents: Number.isNaN(cents) ? Number.NaN : cents,
@@ -89,7 +91,8 @@ export function defaultsFor(slab: YardSlabDetail | undefined, logId: number | un
   return {
     logId: slab.logId, sequenceInLog: slab.sequenceInLog, thicknessIn: inchesForInput(slab.thicknessIn), lengthIn: inchesForInput(slab.lengthIn),
     widths: slab.widthsIn.map((w) => ({ value: inchesForInput(w) })), liveEdge: slab.liveEdge as SlabFormValues['liveEdge'],
-    figures: slab.figures, figureNotes: slab.figureNotes, defects: slab.defects, yardStack: slab.yardStack,
+    figures: slab.figures, figureNotes: slab.figureNotes, yardStack: slab.yardStack,
+    defects: slab.defects.map((d) => ({ kind: d.kind, note: d.note, fromButtIn: d.fromButtIn == null ? '' : inchesForInput(d.fromButtIn), face: d.face ?? '' })),
     yardPosition: slab.yardPosition, priceOverrideDollars: slab.priceOverrideCents === null ? '' : (slab.priceOverrideCents / 100).toFixed(2),
     priceOverrideReason: slab.priceOverrideReason ?? '', description: slab.description, status: slab.status,
   };

@@ -9,6 +9,7 @@ import { formatCents } from '../../../../shared/wood/index';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
+import { ApiError } from '../../../lib/api-client';
 import { InchesField } from '../../../components/ui/inches-field';
 import { paths } from '../../../paths';
 import { figureKindsQuery, logListQuery, useSaveSlab } from '../api';
@@ -26,6 +27,8 @@ export function SlabForm({ slab, logId, onSaved }: Props) {
   const { data: logs = [] } = useQuery(logListQuery());
   const { data: figureKinds = [] } = useQuery(figureKindsQuery());
   const [formError, setFormError] = useState<string | null>(null);
+  /** The server's "well above the target MC" question, with the values that raised it. */
+  const [wetCheck, setWetCheck] = useState<{ message: string; values: Record<string, unknown> } | null>(null);
   const { register, control, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<SlabFormValues>({
     resolver: slabResolver(isNew) as never,
     defaultValues: defaultsFor(slab, logId),
@@ -33,8 +36,10 @@ export function SlabForm({ slab, logId, onSaved }: Props) {
   const override = useWatch({ control, name: 'priceOverrideDollars' });
   const statuses: SlabStatus[] = slab ? staffStatusChoices(slab.status) : ['drying', 'ready'];
 
-  const onSubmit = handleSubmit(async (values) => {
+  /** `values` are what the shared schema made of the form (the API's shape). */
+  const submit = async (values: Record<string, unknown>, confirmWet = false) => {
     setFormError(null);
+    setWetCheck(null);
     const renamed = (name: string) => formFieldName(name) as keyof SlabFormValues;
     // The same rule the server applies: no wider than the log's butt (plus flare), no longer than the log.
     const parsed = values as unknown as Partial<CreateSlab>;
@@ -43,11 +48,13 @@ export function SlabForm({ slab, logId, onSaved }: Props) {
     for (const [field, [message]] of Object.entries(misfit)) setError(renamed(field), { type: 'validate', message });
     if (Object.keys(misfit).length) return;
     try {
-      onSaved(await save.mutateAsync(values as never));
+      onSaved(await save.mutateAsync((confirmWet ? { ...values, confirmAboveTargetMc: true } : values) as never));
     } catch (e) {
+      if (e instanceof ApiError && e.code === 'confirm_wet_listing') { setWetCheck({ message: e.message, values }); return; }
       setFormError(applyServerErrors(e, (name, err) => setError(renamed(String(name)), err), [...FORM_FIELDS, 'widthsIn', 'priceOverrideCents']));
     }
-  });
+  };
+  const onSubmit = handleSubmit((values) => submit(values as unknown as Record<string, unknown>));
 
   const num = { valueAsNumber: true } as const;
   return (
@@ -93,6 +100,17 @@ export function SlabForm({ slab, logId, onSaved }: Props) {
         type="number" inputMode="decimal" step="0.01" min="0" error={errors.priceOverrideDollars?.message} {...register('priceOverrideDollars')} />
       <TextField label="Why the price is set by hand" disabled={!override} error={errors.priceOverrideReason?.message} {...register('priceOverrideReason')} />
       <TextAreaField className="sm:col-span-2" label="Description for buyers" error={errors.description?.message} {...register('description')} />
+      {wetCheck && (
+        <div className="sm:col-span-2">
+          <Notice tone="caution" role="alert" title="Still wet for furniture">
+            <p>{wetCheck.message}</p>
+            <div className="mt-2 flex flex-wrap gap-2">
+              <Button onClick={() => void submit(wetCheck.values, true)} disabled={isSubmitting || save.isPending}>List it anyway</Button>
+              <Button variant="quiet" onClick={() => setWetCheck(null)}>Not yet</Button>
+            </div>
+          </Notice>
+        </div>
+      )}
       <div className="flex flex-wrap gap-2 sm:col-span-2">
         <Button type="submit" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : isNew ? 'Record slab' : 'Save slab'}</Button>
       </div>
