@@ -30,6 +30,7 @@ import { yardSlabRoutes } from './modules/slabs/yard-slabs.routes';
 import { officeRoutes } from './modules/office/office.routes';
 import { millRulesRoutes } from './modules/mill-rules/mill-rules.routes';
 import { readingRoutes } from './modules/readings/readings.routes';
+import { salesTermsRoutes } from './modules/sales-terms/sales-terms.routes';
 import { buyerListRoutes } from './modules/buyer-lists/buyer-lists.routes';
 import { shopAddressRoutes } from './modules/shop-address/shop-address.routes';
 import { matchedSetRoutes } from './modules/matched-sets/matched-sets.routes';
@@ -120,6 +121,7 @@ export function createApp(deps: AppDeps) {
   api.use(matchedSetRoutes(deps));
   api.use(officeRoutes(deps));
   api.use(millRulesRoutes(deps));
+  api.use(salesTermsRoutes(deps));
   api.use(shopAddressRoutes({ publicUrl: deps.publicUrl ?? deps.trustedOrigins?.[0] ?? 'http://localhost:3000' }));
   api.use(apiNotFound);
   app.use('/api', api);

@@ -17,6 +17,9 @@ import { startBackgroundJobs } from './jobs';
 import { getLogger, type Logger } from './lib/logger';
 import { gracefulCloser } from './lib/graceful-close';
 
+/** Keys starting sk_test_local are placeholders that only the local fake accepts. */
+export const usesLocalPaymentFake = (secretKey: string) => secretKey.startsWith('sk_test_local');
+
 export type StartOptions = { env: Env; dev?: boolean; logger?: Logger };
 
 export type Running = {
@@ -60,10 +63,13 @@ export async function startStickerline({ env, dev = false, logger = getLogger() 
   // MAILDEV_WEB_PORT keeps the inbox at one address across restarts (a bookmarked tab keeps working).
   const fakes = wantFakes ? await startLocalFakes({ mailWebPort: env.MAILDEV_WEB_PORT }) : null;
   const smtpPort = env.SMTP_PORT ?? fakes?.smtpPort ?? 25;
+  // The payment fake answers only for the local placeholder key; a real key (sk_test_… or sk_live_… from the
+  // provider) goes to the provider itself, and buyers see its real payment page — nothing else changes.
+  const paymentFake = fakes && usesLocalPaymentFake(env.STRIPE_SECRET_KEY) ? fakes : null;
   const stripe = {
-    host: env.STRIPE_HOST ?? (fakes ? '127.0.0.1' : undefined),
-    port: env.STRIPE_PORT ?? fakes?.stripePort,
-    protocol: env.STRIPE_PROTOCOL ?? (fakes ? ('http' as const) : undefined),
+    host: env.STRIPE_HOST ?? (paymentFake ? '127.0.0.1' : undefined),
+    port: env.STRIPE_PORT ?? paymentFake?.stripePort,
+    protocol: env.STRIPE_PROTOCOL ?? (paymentFake ? ('http' as const) : undefined),
   };
 
 
@@ -89,6 +95,8 @@ export async function startStickerline({ env, dev = false, logger = getLogger() 
   const server: Server = await new Promise((resolve) => {
     const s = app.listen(apiPort, env.HOST, () => resolve(s));
   });
+  // The local payment fake posts its signed events straight to this process (a live account has its endpoint registered instead).
+  paymentFake?.addWebhookEndpoint({ url: `http://127.0.0.1:${apiPort}/api/webhooks/payments`, secret: env.STRIPE_WEBHOOK_SECRET });
   const closer = gracefulCloser(server, logger);
 
   let vite: { close(): Promise<void> } | null = null;

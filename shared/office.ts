@@ -1,18 +1,10 @@
 import { z } from 'zod';
-import { ORDER_STATUSES, type OrderStatus } from './checkout';
+import { ATTEMPT_STATUSES, ORDER_STATUSES, isAttempt, type OrderStatus } from './checkout';
 
 /** The office (admin) contract: inputs the API parses and the forms validate, plus response shapes. */
 
 export const USER_ROLES = ['buyer', 'seller', 'admin'] as const;
 export type UserRole = (typeof USER_ROLES)[number];
-/** A role in Stickerline's words; "buyer" is the one word for the people who buy (never "customer"). */
-export const USER_ROLE_LABELS: Record<UserRole, string> = { buyer: 'Buyer', seller: 'Yard staff', admin: 'Office' };
-/** What a role lets a person do, said before the office changes it. */
-export const USER_ROLE_DESCRIPTIONS: Record<UserRole, string> = {
-  buyer: 'They can reserve and buy slabs, and nothing more.',
-  seller: 'They can record logs, slabs, photos and readings at the yard desk.',
-  admin: 'They can run pickups, refunds, holds, prices and everyone\'s roles.',
-};
 
 const emptyToUndefined = (raw: Record<string, unknown>) =>
   Object.fromEntries(Object.entries(raw).map(([k, v]) => [k, v === '' ? undefined : v]));
@@ -59,8 +51,8 @@ export type AuditEntryView = {
 export type AuditPage = { items: AuditEntryView[]; total: number; page: number; pageSize: number; actions: string[]; entityTypes: string[] };
 
 // --- orders & refunds ------------------------------------------------------------------------
-// One order state list, kept with its words in shared/checkout.ts.
-export { ORDER_STATUSES, ORDER_STATUS_LABELS, type OrderStatus } from './checkout';
+// One list of order states for both sides; attempts (pending-payment, abandoned) are listed only when asked for.
+export { ORDER_STATUSES, ATTEMPT_STATUSES, isAttempt, type OrderStatus };
 
 export const orderListQuerySchema = z.object({
   status: z.enum(ORDER_STATUSES, { error: 'Unknown order status' }).optional(),
@@ -113,8 +105,6 @@ export const rescheduleSchema = z.object({
 export type RescheduleInput = z.infer<typeof rescheduleSchema>;
 
 export type PickupOrder = {
-  /** The booked window has begun at the mill: only then can the office record that the buyer did not come. */
-  pickupStarted: boolean;
   id: number; code: string; status: OrderStatus; buyerName: string; buyerEmail: string; slabCodes: string[];
   totalWeightLb: number; longestSlabIn: number; loadingHelp: boolean; pickedUpAt: string | null;
 };
@@ -129,7 +119,16 @@ export type ActiveHold = {
 };
 
 // --- the mill's numbers ------------------------------------------------------------------------
-export type MonthlySpeciesSales = { month: string; speciesName: string; boardFeet: number; revenueCents: number; slabs: number };
+/** Money of sold lines, split by kind; refunds are counted against the month of the sale they undo. */
+export type SalesMoney = {
+  woodCents: number; servicesCents: number; taxCents: number;
+  refundedWoodCents: number; refundedServicesCents: number; refundedTaxCents: number;
+  /** Wood plus services, net of refunds: the mill's revenue (tax is collected for the state, not revenue). */
+  revenueCents: number;
+  /** Tax collected net of tax refunded. */
+  netTaxCents: number;
+};
+export type MonthlySpeciesSales = SalesMoney & { month: string; speciesName: string; boardFeet: number; slabs: number };
 export type SlabStatusCount = { status: string; count: number };
 export type DryingStockForecast = {
   id: number; code: string; speciesName: string; thicknessIn: number; moisturePercent: number | null;
@@ -138,6 +137,8 @@ export type DryingStockForecast = {
 
 export type MillNumbers = {
   sales: MonthlySpeciesSales[];
+  /** Over all months: equals the sum of the paid orders' amounts and refunds, to the cent. */
+  totals: SalesMoney;
   statusCounts: SlabStatusCount[];
   averageDaysMilledToSold: number | null;
   soldSlabsWithMillDate: number;

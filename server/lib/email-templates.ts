@@ -37,6 +37,9 @@ export type OrderEmailInput = {
   name: string;
   code: string;
   totalCents: number;
+  /** Sales tax, its own line (0 when none is due). */
+  taxCents: number;
+  taxExemptCertificate: string | null;
   totalWeightLb: number;
   slabs: { code: string; speciesName: string; totalCents: number; withFlattening: boolean }[];
   pickup: PickupDetails;
@@ -57,6 +60,7 @@ export function orderConfirmationEmail(o: OrderEmailInput): EmailContent {
     [
       `Hello ${o.name},`,
       `Thank you. Your payment of ${money(o.totalCents)} went through and these slabs are now yours:\n${slabLines(o.slabs)}`,
+      o.taxCents > 0 ? `Sales tax: ${money(o.taxCents)}` : o.taxExemptCertificate ? `No sales tax: resale certificate ${o.taxExemptCertificate}.` : 'Sales tax: $0.00',
       `Pickup: ${pickupLine(o.pickup)}.`,
       `Total weight about ${formatWeight(o.totalWeightLb)}. ${o.vehicle}`,
       `What to bring:\n${o.bring.map((b) => `• ${b}`).join('\n')}`,

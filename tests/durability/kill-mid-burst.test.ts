@@ -32,10 +32,14 @@ async function burst(server: ChildServer, buyers: ReturnType<typeof client>[], s
         const held = await buyer('POST', `/api/slabs/${slabId}/hold`, {});
         if (held.status !== 201) continue;
         const slot = slots[(w + next) % slots.length];
-        const paid = await buyer('POST', '/api/checkout',
-          { holdIds: [held.body.hold.id], pickupWindowId: slot.windowId, pickupOn: slot.date, cardToken: 'tok_visa' },
+        const started = await buyer('POST', '/api/checkout',
+          { holdIds: [held.body.hold.id], pickupWindowId: slot.windowId, pickupOn: slot.date, paymentMethod: 'card' },
           { 'Idempotency-Key': `kill-test-${w}-${next}-${Date.now()}` });
-        if (paid.status === 201) {
+        if (started.status !== 201) continue;
+        // The buyer pays on the fake's page (its signed event reaches the server), then comes back.
+        await fetch(started.body.paymentUrl, { method: 'POST', redirect: 'manual', body: new URLSearchParams({ outcome: 'succeed', event: 'now' }) });
+        const paid = await buyer('POST', `/api/orders/${started.body.orderId}/payment-check`, {});
+        if (paid.status === 200 && paid.body.order.status === 'paid') {
           acks.push({ orderId: paid.body.order.id, code: paid.body.order.code, slabId });
           if (acks.length >= stopAfterAcks && !stopped) { stopped = true; onStop(); }
         }

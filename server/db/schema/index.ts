@@ -13,3 +13,4 @@ export * from './audit-log';
 export * from './email-outbox';
 export * from './matched-sets';
 export * from './buyer-lists';
+export * from './sales-terms';

@@ -18,10 +18,14 @@ export const orders = pgTable('orders', {
   id: serial('id').primaryKey(),
   code: text('code').notNull().unique(),
   buyerId: text('buyer_id').notNull().references(() => user.id),
-  // pending-payment | paid | picked-up | no-show | refunded | cancelled
+  // Attempts: pending-payment | abandoned (never paid). Orders: paid | picked-up | no-show | refunded | cancelled.
   status: text('status').notNull(),
   slabsCents: integer('slabs_cents').notNull(),
   servicesCents: integer('services_cents').notNull().default(0),
+  /** Sales tax, its own line; totalCents includes it. */
+  taxCents: integer('tax_cents').notNull().default(0),
+  /** The approved resale certificate that exempted this order from sales tax, as it was at checkout. */
+  taxExemptCertificate: text('tax_exempt_certificate'),
   totalCents: integer('total_cents').notNull(),
   refundedCents: integer('refunded_cents').notNull().default(0),
   totalWeightLb: doublePrecision('total_weight_lb').notNull(),
@@ -31,6 +35,9 @@ export const orders = pgTable('orders', {
   pickupOn: date('pickup_on', { mode: 'string' }),
   idempotencyKey: text('idempotency_key').notNull().unique(),
   chargeId: text('charge_id'),
+  /** The provider's hosted payment page for this attempt (a checkout session) and where the buyer is sent. */
+  checkoutSessionId: text('checkout_session_id').unique(),
+  paymentUrl: text('payment_url'),
   disputed: boolean('disputed').notNull().default(false),
   reminderSentAt: timestamp('reminder_sent_at', { withTimezone: true }),
   pickedUpAt: timestamp('picked_up_at', { withTimezone: true }),
@@ -43,7 +50,7 @@ export const orders = pgTable('orders', {
   check('orders_status_known', oneOf(t.status, ORDER_STATUSES)),
   check('orders_slabs_cents_in_range', cents(t.slabsCents)),
   check('orders_services_cents_in_range', cents(t.servicesCents)),
-  check('orders_total_adds_up', sql`${t.totalCents} = ${t.slabsCents} + ${t.servicesCents}`),
+  check('orders_total_adds_up', sql`${t.totalCents} = ${t.slabsCents} + ${t.servicesCents} + ${t.taxCents}`),
   check('orders_refunded_within_total', sql`${t.refundedCents} >= 0 and ${t.refundedCents} <= ${t.totalCents}`),
   check('orders_weight_in_range', within(t.totalWeightLb, 0, DB_LIMITS.maxWeightLb)),
   check('orders_longest_in_range', within(t.longestSlabIn, 0, DB_LIMITS.maxLengthIn)),
@@ -65,6 +72,8 @@ export const orderLines = pgTable('order_lines', {
   withFlattening: boolean('with_flattening').notNull().default(false),
   slabCents: integer('slab_cents').notNull(),
   servicesCents: integer('services_cents').notNull().default(0),
+  /** This line's share of the order's sales tax (the order's tax spread over lines, adding up exactly). */
+  taxCents: integer('tax_cents').notNull().default(0),
   totalCents: integer('total_cents').notNull(),
 }, (t) => [
   // A slab is one of a kind: at most one sold line can exist for it.
@@ -73,7 +82,7 @@ export const orderLines = pgTable('order_lines', {
   check('order_lines_status_known', oneOf(t.status, ORDER_LINE_STATUSES)),
   check('order_lines_slab_cents_in_range', cents(t.slabCents)),
   check('order_lines_services_cents_in_range', cents(t.servicesCents)),
-  check('order_lines_total_adds_up', sql`${t.totalCents} = ${t.slabCents} + ${t.servicesCents}`),
+  check('order_lines_total_adds_up', sql`${t.totalCents} = ${t.slabCents} + ${t.servicesCents} + ${t.taxCents}`),
   check('order_lines_board_feet_in_range', within(t.boardFeet, 0, DB_LIMITS.maxBoardFeet)),
   check('order_lines_weight_in_range', within(t.weightLb, 0, DB_LIMITS.maxWeightLb)),
   check('order_lines_length_in_range', within(t.lengthIn, 0, DB_LIMITS.maxLengthIn)),
@@ -95,4 +104,21 @@ export const payments = pgTable('payments', {
   check('payments_kind_known', oneOf(t.kind, PAYMENT_KINDS)),
   check('payments_status_known', oneOf(t.status, PAYMENT_STATUSES)),
   check('payments_amount_in_range', cents(t.amountCents)),
+]);
+
+/**
+ * Which part of a refund was wood, services and tax on which line: the office numbers add these
+ * up, so revenue net of refunds reconciles with the orders to the cent.
+ */
+export const refundLines = pgTable('refund_lines', {
+  id: serial('id').primaryKey(),
+  paymentId: integer('payment_id').notNull().references(() => payments.id, { onDelete: 'cascade' }),
+  orderLineId: integer('order_line_id').notNull().references(() => orderLines.id, { onDelete: 'cascade' }),
+  woodCents: integer('wood_cents').notNull(),
+  servicesCents: integer('services_cents').notNull(),
+  taxCents: integer('tax_cents').notNull(),
+}, (t) => [
+  index('refund_lines_payment_idx').on(t.paymentId),
+  index('refund_lines_line_idx').on(t.orderLineId),
+  check('refund_lines_amounts_not_negative', sql`${t.woodCents} >= 0 and ${t.servicesCents} >= 0 and ${t.taxCents} >= 0`),
 ]);

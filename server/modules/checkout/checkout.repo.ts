@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, inArray, isNull } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, isNotNull, isNull } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
 import { holds, orderLines, orders, payments, pickupWindows, slabs, species, user } from '../../db/schema/index';
 
@@ -22,8 +22,26 @@ export function lockBuyerHolds(tx: Tx, buyerId: string, holdIds?: number[]) {
 
 /** Lines of unfinished checkouts for these slabs: a second checkout must not pay for them too. */
 export function pendingLinesFor(tx: Tx, slabIds: number[]) {
-  return tx.select({ slabId: orderLines.slabId }).from(orderLines).where(and(inArray(orderLines.slabId, slabIds), eq(orderLines.status, 'pending')));
+  if (!slabIds.length) return Promise.resolve([]);
+  return tx.select({ slabId: orderLines.slabId, orderId: orderLines.orderId, sessionId: orders.checkoutSessionId }).from(orderLines)
+    .innerJoin(orders, eq(orders.id, orderLines.orderId))
+    .where(and(inArray(orderLines.slabId, slabIds), eq(orderLines.status, 'pending')));
 }
+
+/** The buyer's active holds (all, or the listed ones), without locking: a look before a checkout starts. */
+export const buyerHeldSlabIds = (tx: Tx, buyerId: string, holdIds?: number[]) =>
+  tx.select({ slabId: holds.slabId }).from(holds)
+    .where(and(eq(holds.buyerId, buyerId), eq(holds.status, 'active'), holdIds ? inArray(holds.id, holdIds) : undefined));
+
+/** Locks the attempt behind a payment page: settling it happens once, whoever gets here first. */
+export async function lockOrderBySession(tx: Tx, sessionId: string) {
+  const [row] = await tx.select().from(orders).where(eq(orders.checkoutSessionId, sessionId)).for('update');
+  return row ?? null;
+}
+
+/** Active holds of this buyer on these slabs (the ones a paid attempt converts). */
+export const activeHoldsOn = (tx: Tx, buyerId: string, slabIds: number[]) =>
+  tx.select({ id: holds.id }).from(holds).where(and(eq(holds.buyerId, buyerId), eq(holds.status, 'active'), inArray(holds.slabId, slabIds))).for('update');
 
 export async function insertOrder(tx: Tx, values: typeof orders.$inferInsert) {
   const [row] = await tx.insert(orders).values(values).returning();
@@ -48,9 +66,10 @@ export async function findPaymentByKey(tx: Tx, key: string) {
   return row ?? null;
 }
 
+/** The buyer's orders: only attempts that were paid (a declined or abandoned attempt is not an order). */
 export const ordersOfBuyer = (tx: Tx, buyerId: string) =>
   tx.select({ order: orders, window: pickupWindows }).from(orders).leftJoin(pickupWindows, eq(pickupWindows.id, orders.pickupWindowId))
-    .where(eq(orders.buyerId, buyerId)).orderBy(desc(orders.createdAt), desc(orders.id));
+    .where(and(eq(orders.buyerId, buyerId), isNotNull(orders.paidAt))).orderBy(desc(orders.createdAt), desc(orders.id));
 
 export async function orderWithWindow(tx: Tx, id: number) {
   const [row] = await tx.select({ order: orders, window: pickupWindows, buyerEmail: user.email, buyerName: user.name }).from(orders)

@@ -1,34 +1,32 @@
 import type { Db, Tx } from '../../db/client';
 import { AppError } from '../../lib/errors';
-import { recordAudit } from '../../lib/audit';
 import type { SessionUser } from '../../lib/session';
 import type { Payments } from '../../lib/payments';
-import { queueEmail } from '../../lib/outbox';
-import { orderConfirmationEmail } from '../../lib/email-templates';
 import type { checkoutSchema } from '../../../shared/checkout';
 import type { z } from 'zod';
 import { loadPricingRules } from '../pricing/pricing.service';
-import { withReadingsAndCovers, closeHolds } from '../holds/holds.repo';
+import { withReadingsAndCovers } from '../holds/holds.repo';
 import { quoteSlab } from '../pricing/slab-quote';
-import { getLogger } from '../../lib/logger';
 import { isUniqueViolation } from '../holds/unique-violation';
 import { claimPickupPlace } from '../pickups/pickups.service';
-import { orderEmailInput, orderView } from './order-view';
+import { orderView } from './order-view';
+import { taxRuleFor } from '../sales-terms/sales-terms.service';
+import { taxForLines } from '../../../shared/sales-terms';
+import { chargeKey, closeAttempt } from './payment-settlement';
 import * as repo from './checkout.repo';
-import { moveSlabs } from '../slabs/slab-state';
 
 type CheckoutInput = z.infer<typeof checkoutSchema>;
 export type CheckoutDeps = { db: Db; payments: Payments; publicUrl: string };
 type Order = NonNullable<Awaited<ReturnType<typeof repo.findOrder>>>;
 
-/** Holds are kept at least this long while a payment is under way, so the sweep cannot free them mid-payment. */
-const PAYMENT_GRACE_MS = 15 * 60_000;
+/** A payment page lives 31 minutes (the provider's shortest is 30); holds outlast it, so the sweep cannot free them mid-payment. */
+const PAGE_LIFETIME_MS = 31 * 60_000;
+const PAYMENT_GRACE_MS = PAGE_LIFETIME_MS + 5 * 60_000;
 
 export const orderCode = (id: number, at: Date) =>
   `SL-${String(at.getUTCFullYear() % 100).padStart(2, '0')}${String(at.getUTCMonth() + 1).padStart(2, '0')}-${String(id).padStart(4, '0')}`;
-const chargeKey = (key: string) => `order-${key}`;
 
-/** Step 1, one transaction: check holds and pickup place, snapshot prices, write a pending order. */
+/** One transaction: check holds and pickup place, snapshot prices, write a pending order. */
 async function prepareOrder(db: Db, buyer: SessionUser, input: CheckoutInput, key: string, now: Date) {
   return db.transaction(async (tx) => {
     const held = await repo.lockBuyerHolds(tx, buyer.id, input.holdIds);
@@ -59,63 +57,68 @@ async function prepareOrder(db: Db, buyer: SessionUser, input: CheckoutInput, ke
         withFlattening: flatten, slabCents: q.breakdown.slabCents, servicesCents: q.breakdown.flatteningCents, totalCents: q.breakdown.totalCents,
       };
     });
+    // Sales tax is computed here once, on the server, and stored: every later view reads these numbers.
+    const rule = await taxRuleFor(tx, buyer.id);
+    const tax = taxForLines(lines, rule);
+    const taxed = lines.map((l, i) => ({ ...l, taxCents: tax.perLine[i], totalCents: l.slabCents + l.servicesCents + tax.perLine[i] }));
     const slabsCents = lines.reduce((t, l) => t + l.slabCents, 0);
     const servicesCents = lines.reduce((t, l) => t + l.servicesCents, 0);
     const order = await repo.insertOrder(tx, {
-      code: `pending-${key}`, buyerId: buyer.id, status: 'pending-payment', slabsCents, servicesCents, totalCents: slabsCents + servicesCents,
+      code: `pending-${key}`, buyerId: buyer.id, status: 'pending-payment', slabsCents, servicesCents,
+      taxCents: tax.taxCents, taxExemptCertificate: rule.certificate, totalCents: slabsCents + servicesCents + tax.taxCents,
       totalWeightLb: lines.reduce((t, l) => t + l.weightLb, 0), longestSlabIn: Math.max(...lines.map((l) => l.lengthIn)),
       loadingHelp: input.loadingHelp, pickupWindowId: window.id, pickupOn: input.pickupOn, idempotencyKey: key, createdAt: now,
     });
     const coded = await repo.updateOrder(tx, order.id, { code: orderCode(order.id, now) });
-    await repo.insertLines(tx, lines.map((l) => ({ ...l, orderId: order.id })));
+    await repo.insertLines(tx, taxed.map((l) => ({ ...l, orderId: order.id })));
     const graceUntil = new Date(now.getTime() + PAYMENT_GRACE_MS);
     await repo.keepHoldsUntil(tx, held.filter((h) => h.hold.expiresAt < graceUntil).map((h) => h.hold.id), graceUntil);
     return { order: coded, holdIds: held.map((h) => h.hold.id), slabIds };
   });
 }
 
-/** Step 3, one transaction: the charge went through — slabs sold, holds converted, order paid, mail queued. */
-async function completeOrder(deps: CheckoutDeps, buyer: SessionUser, prepared: Awaited<ReturnType<typeof prepareOrder>>, chargeId: string, now: Date) {
-  const { order, holdIds, slabIds } = prepared;
-  await deps.db.transaction(async (tx) => {
-    const sold = await moveSlabs(tx, slabIds, 'sold', 'sale', now);
-    if (sold.length !== slabIds.length) throw new AppError(409, 'slab_gone', 'One of these slabs is no longer held for you.');
-    await repo.setLineStatus(tx, order.id, 'sold'); // the unique index refuses a second sale of any slab
-    await closeHolds(tx, holdIds, 'converted', buyer.id, now);
-    await repo.updateOrder(tx, order.id, { status: 'paid', paidAt: now, chargeId });
-    await repo.insertPayment(tx, { orderId: order.id, kind: 'charge', providerId: chargeId, amountCents: order.totalCents, status: 'succeeded', idempotencyKey: chargeKey(order.idempotencyKey), createdBy: buyer.id });
-    await recordAudit(tx, { actor: buyer, action: 'order.paid', entityType: 'order', entityId: order.id, before: { status: 'pending-payment' }, after: { status: 'paid', totalCents: order.totalCents, chargeId } });
-    const mail = await orderEmailInput(tx, order.id, deps.publicUrl);
-    await queueEmail(tx, { to: mail.to, kind: 'order-confirmation', content: orderConfirmationEmail(mail.input) });
-  });
-}
-
-/** The payment did not happen (or was undone): the order is closed, its lines void, the holds stay with the buyer. */
-async function failOrder(db: Db, order: Order, reason: string, chargeId?: string) {
+/** The attempt could not reach the payment page: closed at once, holds kept. */
+async function failAttempt(db: Db, order: Order, reason: string) {
   await db.transaction(async (tx: Tx) => {
     await repo.setLineStatus(tx, order.id, 'void');
-    await repo.updateOrder(tx, order.id, { status: 'cancelled' });
+    await repo.updateOrder(tx, order.id, { status: 'abandoned' });
     await repo.insertPayment(tx, {
-      orderId: order.id, kind: 'charge', providerId: chargeId ?? null, amountCents: order.totalCents,
-      status: chargeId ? 'refunded' : 'failed', reason, idempotencyKey: chargeKey(order.idempotencyKey), createdBy: order.buyerId,
+      orderId: order.id, kind: 'charge', providerId: null, amountCents: order.totalCents, status: 'failed', reason,
+      idempotencyKey: chargeKey(order.idempotencyKey), createdBy: order.buyerId,
     });
   });
 }
 
-/** A repeated request with a key already used: answer with the first outcome, never charge again. */
+/** A repeated request with a key already used: answer with the first outcome, never open a second page. */
 async function replay(db: Db, buyer: SessionUser, order: Order) {
   if (order.buyerId !== buyer.id) throw new AppError(409, 'key_in_use', 'This checkout key belongs to another checkout. Reload the page and try again.');
-  if (order.status === 'pending-payment') throw new AppError(409, 'payment_in_progress', 'This payment is still being processed. Wait a moment and check your orders.');
-  if (order.status === 'cancelled') {
+  if (order.status === 'abandoned') {
     const payment = await repo.findPaymentByKey(db, chargeKey(order.idempotencyKey));
-    throw new AppError(402, 'payment_failed', payment?.reason || 'The payment did not go through. Your holds are kept — try again.');
+    throw new AppError(409, 'attempt_closed', payment?.reason || 'This payment attempt has ended. Your holds are kept — start the checkout again.');
   }
-  return { order: await orderView(db, order.id), replayed: true };
+  return { order: await orderView(db, order.id), paymentUrl: order.paymentUrl, replayed: true };
 }
+
+/**
+ * Earlier unfinished attempts on these slabs by this buyer (the tab was closed, the back button was
+ * pressed): their pages are closed at the provider first, so they can never be paid later. If one
+ * turns out to be paid, it becomes the order and this checkout finds nothing left to pay for.
+ */
+async function closeEarlierAttempts(deps: CheckoutDeps, buyer: SessionUser, holdIds?: number[]) {
+  const slabIds = (await repo.buyerHeldSlabIds(deps.db, buyer.id, holdIds)).map((h) => h.slabId);
+  const sessions = new Set((await repo.pendingLinesFor(deps.db, slabIds)).map((l) => l.sessionId).filter((id): id is string => !!id));
+  for (const sessionId of sessions) await closeAttempt(deps, sessionId);
+}
+
+const pageLines = (lines: Awaited<ReturnType<typeof repo.linesOf>>) => lines.flatMap((l) => [
+  { name: `${l.speciesName} slab ${l.slabCode}`, amountCents: l.slabCents },
+  ...(l.servicesCents > 0 ? [{ name: `Flattening, slab ${l.slabCode}`, amountCents: l.servicesCents }] : []),
+]);
 
 export async function checkout(deps: CheckoutDeps, buyer: SessionUser, input: CheckoutInput, key: string, now = new Date()) {
   const existing = await repo.findOrderByKey(deps.db, key);
   if (existing) return replay(deps.db, buyer, existing);
+  await closeEarlierAttempts(deps, buyer, input.holdIds);
   let prepared: Awaited<ReturnType<typeof prepareOrder>>;
   try {
     prepared = await prepareOrder(deps.db, buyer, input, key, now);
@@ -126,25 +129,21 @@ export async function checkout(deps: CheckoutDeps, buyer: SessionUser, input: Ch
     throw err;
   }
   const { order } = prepared;
-  let chargeId: string;
+  const lines = await repo.linesOf(deps.db, order.id);
+  let page: { sessionId: string; url: string };
   try {
-    ({ chargeId } = await deps.payments.charge({
-      amountCents: order.totalCents, source: input.cardToken, idempotencyKey: chargeKey(key),
-      description: `Stickerline order ${order.code}`, metadata: { orderId: String(order.id), orderCode: order.code, checkoutKey: key },
-    }));
+    page = await deps.payments.openPaymentPage({
+      idempotencyKey: `page-${key}`,
+      lines: [...pageLines(lines), ...(order.taxCents > 0 ? [{ name: 'Sales tax', amountCents: order.taxCents }] : [])],
+      successUrl: `${deps.publicUrl}/orders/${order.id}?payment=returned`,
+      cancelUrl: `${deps.publicUrl}/orders/${order.id}?payment=cancelled`,
+      customerEmail: buyer.email, expiresAt: new Date(now.getTime() + PAGE_LIFETIME_MS),
+      metadata: { orderId: String(order.id), orderCode: order.code, checkoutKey: key },
+    });
   } catch (err) {
-    await failOrder(deps.db, order, err instanceof AppError ? err.message : 'The payment service could not be reached.');
+    await failAttempt(deps.db, order, err instanceof AppError ? err.message : 'The payment service could not be reached.');
     throw err;
   }
-  try {
-    await completeOrder(deps, buyer, prepared, chargeId, now);
-  } catch (err) {
-    // Money taken but the sale could not be recorded: give the money back before reporting.
-    getLogger().error({ part: 'checkout', order: order.code, chargeId, err }, 'an order could not be completed after its charge; refunding');
-    await deps.payments.refund({ chargeId, amountCents: order.totalCents, idempotencyKey: `${chargeKey(key)}-undo`, reason: 'duplicate' });
-    await failOrder(deps.db, order, 'The sale could not be completed; the charge was refunded.', chargeId);
-    if (err instanceof AppError) throw err;
-    throw new AppError(409, 'sale_failed', 'These slabs could not be sold to you; the charge was refunded in full.');
-  }
-  return { order: await orderView(deps.db, order.id), replayed: false };
+  await repo.updateOrder(deps.db, order.id, { checkoutSessionId: page.sessionId, paymentUrl: page.url });
+  return { order: await orderView(deps.db, order.id), paymentUrl: page.url, replayed: false };
 }

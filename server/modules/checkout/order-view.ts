@@ -2,7 +2,7 @@ import type { Tx } from '../../db/client';
 import { notFound } from '../../lib/errors';
 import type { SessionUser } from '../../lib/session';
 import { loadingAdvice } from '../../../shared/loading';
-import type { OrderStatus, OrderSummary, OrderView } from '../../../shared/checkout';
+import { isAttempt, type OrderStatus, type OrderSummary, type OrderView } from '../../../shared/checkout';
 import type { PriceLine } from '../../../shared/slabs';
 import { readYardAddress } from '../pickups/pickups.repo';
 import * as repo from './checkout.repo';
@@ -14,18 +14,22 @@ export async function orderView(tx: Tx, id: number): Promise<OrderView & { buyer
   if (!found) throw notFound('That order');
   const { order, window } = found;
   const [lines, yardAddress] = await Promise.all([repo.linesOf(tx, id), readYardAddress(tx)]);
+  const attempt = isAttempt(order.status as OrderStatus);
   return {
     id: order.id, code: order.code, status: order.status as OrderStatus,
-    slabsCents: order.slabsCents, servicesCents: order.servicesCents, totalCents: order.totalCents, refundedCents: order.refundedCents,
+    slabsCents: order.slabsCents, servicesCents: order.servicesCents, taxCents: order.taxCents, taxExemptCertificate: order.taxExemptCertificate,
+    totalCents: order.totalCents,
+    refundedCents: order.refundedCents, paymentUrl: order.status === 'pending-payment' ? order.paymentUrl : null,
     totalWeightLb: Math.round(order.totalWeightLb), longestSlabIn: order.longestSlabIn,
     heaviestSlabLb: Math.round(Math.max(0, ...lines.map((l) => l.weightLb))),
-    loadingHelp: order.loadingHelp, disputed: order.disputed,
+    // An attempt books nothing yet: no pickup and no loading help are shown until it is paid.
+    loadingHelp: attempt ? false : order.loadingHelp, disputed: order.disputed,
     createdAt: order.createdAt.toISOString(), paidAt: order.paidAt?.toISOString() ?? null,
-    pickup: { on: order.pickupOn, startsAt: window?.startsAt ?? null, endsAt: window?.endsAt ?? null, yardAddress },
+    pickup: attempt ? null : { on: order.pickupOn, startsAt: window?.startsAt ?? null, endsAt: window?.endsAt ?? null, yardAddress },
     lines: lines.map((l) => ({
       id: l.id, slabId: l.slabId, slabCode: l.slabCode, speciesName: l.speciesName, boardFeet: l.boardFeet,
       weightLb: Math.round(l.weightLb), lengthIn: l.lengthIn, withFlattening: l.withFlattening,
-      priceLines: (l.priceBreakdown as Breakdown)?.lines ?? [], slabCents: l.slabCents, servicesCents: l.servicesCents,
+      priceLines: (l.priceBreakdown as Breakdown)?.lines ?? [], slabCents: l.slabCents, servicesCents: l.servicesCents, taxCents: l.taxCents,
       totalCents: l.totalCents, status: l.status,
     })),
     buyer: { id: order.buyerId, email: found.buyerEmail, name: found.buyerName },
@@ -59,9 +63,10 @@ export async function orderEmailInput(tx: Tx, id: number, publicUrl: string) {
   return {
     to: o.buyer.email,
     input: {
-      name: o.buyer.name, code: o.code, totalCents: o.totalCents, totalWeightLb: o.totalWeightLb,
-      slabs: o.lines.map((l) => ({ code: l.slabCode, speciesName: l.speciesName, totalCents: l.totalCents, withFlattening: l.withFlattening })),
-      pickup: { yardAddress: o.pickup.yardAddress ?? 'the mill yard', on: o.pickup.on ?? '', startsAt: o.pickup.startsAt ?? '', endsAt: o.pickup.endsAt ?? '' },
+      name: o.buyer.name, code: o.code, totalCents: o.totalCents, taxCents: o.taxCents, taxExemptCertificate: o.taxExemptCertificate, totalWeightLb: o.totalWeightLb,
+      // Lines before tax; the tax is its own line.
+      slabs: o.lines.map((l) => ({ code: l.slabCode, speciesName: l.speciesName, totalCents: l.slabCents + l.servicesCents, withFlattening: l.withFlattening })),
+      pickup: { yardAddress: o.pickup?.yardAddress ?? 'the mill yard', on: o.pickup?.on ?? '', startsAt: o.pickup?.startsAt ?? '', endsAt: o.pickup?.endsAt ?? '' },
       bring: advice?.bring ?? [], vehicle: advice?.vehicle ?? '', loadingHelp: o.loadingHelp, caution: advice?.caution ?? '',
       url: `${publicUrl}/orders/${o.id}`,
     },

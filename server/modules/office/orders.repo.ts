@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, exists, gte, ilike, inArray, lte, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, exists, gte, ilike, inArray, isNotNull, lte, or, sql, type SQL } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
 import { closedDays, millSettings, orderLines, orders, payments, pickupWindows, slabs, user } from '../../db/schema/index';
 
@@ -10,7 +10,8 @@ const orderWithBuyer = {
 
 export async function findOrders(db: Tx, { status, q }: { status?: string; q?: string }) {
   const f: (SQL | undefined)[] = [];
-  if (status) f.push(eq(orders.status, status));
+  // A payment attempt is not an order: without a state asked for, only orders that were paid are listed.
+  f.push(status ? eq(orders.status, status) : isNotNull(orders.paidAt));
   if (q) {
     const like = `%${escapeLike(q)}%`;
     f.push(or(

@@ -13,6 +13,7 @@ import * as repo from './refunds.repo';
 import { moveSlabs } from '../slabs/slab-state';
 import { getLogger } from '../../lib/logger';
 import { getOrderDetail, toPaymentView } from './orders.service';
+import { recordRefundAllocation } from './refund-allocation';
 
 export type RefundDeps = { db: Db; payments: Payments; mailer: Mailer; publicUrl?: string; trustedOrigins?: string[] };
 export type RefundRequest = Required<Omit<CreateRefundInput, 'slabIds'>> & { slabIds: number[]; idempotencyKey: string };
@@ -79,6 +80,7 @@ export async function issueRefund(deps: RefundDeps, actor: SessionUser | null, o
     const current = (await orders.lockOrder(tx, orderId))!;
     const row = await repo.settleRefund(tx, payment.id, { status: 'succeeded', providerId: providerRefundId });
     const lines = (await orders.linesOf(tx, [orderId])).map((l) => l.line).filter((l) => r.slabIds.includes(l.slabId) && l.status === 'sold');
+    await recordRefundAllocation(tx, { orderId, paymentId: payment.id, amountCents: r.amountCents, fullLineIds: lines.map((l) => l.id) });
     await orders.setLinesStatus(tx, lines.map((l) => l.id), 'refunded');
     // The money has gone back already: a slab that is somehow elsewhere is left where it is, never blocks the record.
     await moveSlabs(tx, lines.map((l) => l.slabId), r.returnSlabsTo, 'refund');

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '../../lib/api-client';
-import type { CheckoutInput, OrderResponse } from '../../../shared/checkout';
+import type { CheckoutInput, CheckoutStarted } from '../../../shared/checkout';
 import type { PickupSlotsResponse } from '../../../shared/pickups';
 
 export const checkoutKeys = {
@@ -23,7 +23,7 @@ export function useCheckout() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: ({ input, key }: { input: CheckoutInput; key: string }) =>
-      apiFetch<OrderResponse>('/api/checkout', { method: 'POST', body: input, headers: { 'Idempotency-Key': key } }),
+      apiFetch<CheckoutStarted>('/api/checkout', { method: 'POST', body: input, headers: { 'Idempotency-Key': key } }),
     // Holds, orders and slab statuses all change: refresh them by their key prefixes.
     onSettled: () => Promise.all(['holds', 'orders', 'slabs', 'checkout'].map((k) => qc.invalidateQueries({ queryKey: [k] }))),
   });

@@ -17,7 +17,8 @@ export type BookedOrder = { id: number; code: string; totalCents: number; pickup
 
 /**
  * From a held slab's confirmation: open the reservations, go to checkout, take the first open
- * pickup time, choose the test card that goes through, pay, and land on the order page.
+ * pickup time, go to the payment page (the local fake's), let the test payment succeed, and land
+ * back on the order page.
  */
 export async function checkOutHeldSlabs(page: Page, codes: string[]): Promise<BookedOrder> {
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'My holds' }).click();
@@ -32,12 +33,17 @@ export async function checkOutHeldSlabs(page: Page, codes: string[]): Promise<Bo
   const [, pickupOn] = (await slot.getAttribute('value'))!.split('|');
   const slotLabel = (await slot.locator('xpath=..').textContent()) ?? '';
   const [, startsAt, endsAt] = /(\d{2}:\d{2})–(\d{2}:\d{2})/.exec(slotLabel)!;
-  await page.getByRole('radio', { name: 'Test Visa — payment goes through' }).check();
-  const pay = page.getByRole('button', { name: /^Pay \$/ });
+  const pay = page.getByRole('button', { name: /^Go to payment — \$/ });
   const totalCents = centsFrom((await pay.textContent()) ?? '');
   await pay.click();
 
-  await page.waitForURL(/\/orders\/\d+$/, { timeout: 30_000 });
+  // The local test payment page stands where the provider's page would be; it shows the same total.
+  await page.waitForURL(/\/pay\/cs_test_/, { timeout: 30_000 });
+  await page.getByText('Local test payment page.').waitFor();
+  expect(centsFrom((await page.getByRole('row', { name: /Total/ }).textContent()) ?? '')).toBe(totalCents);
+  await page.getByRole('button', { name: 'Test payment succeeds' }).click();
+
+  await page.waitForURL(/\/orders\/\d+/, { timeout: 30_000 });
   const heading = page.getByRole('heading', { level: 1, name: /^Order / });
   const code = ((await heading.textContent()) ?? '').replace(/^Order /, '').trim();
   await page.getByRole('status').filter({ hasText: 'Paid' }).waitFor();
@@ -46,5 +52,5 @@ export async function checkOutHeldSlabs(page: Page, codes: string[]): Promise<Bo
   for (const c of codes) await page.getByRole('link', { name: new RegExp(`slab ${c}$`) }).waitFor();
   const totals = (await page.getByRole('region', { name: 'Slabs' }).textContent()) ?? '';
   expect(centsFrom(totals.slice(totals.lastIndexOf('Total')))).toBe(totalCents);
-  return { id: Number(/\/orders\/(\d+)$/.exec(page.url())![1]), code, totalCents, pickupOn, startsAt, endsAt };
+  return { id: Number(/\/orders\/(\d+)/.exec(page.url())![1]), code, totalCents, pickupOn, startsAt, endsAt };
 }

@@ -34,8 +34,48 @@ export function hold(agent: Agent, slabId: number) {
   return agent.post(`/api/slabs/${slabId}/hold`).set('Origin', TEST_ORIGIN);
 }
 
-export function pay(agent: Agent, body: Record<string, unknown>, key = newKey()) {
-  return agent.post('/api/checkout').set('Origin', TEST_ORIGIN).set('Idempotency-Key', key).send({ cardToken: 'tok_visa', ...body });
+/** Starts a card checkout: the answer carries the attempt's id and its payment page. */
+export function startCheckout(agent: Agent, body: Record<string, unknown>, key = newKey()) {
+  return agent.post('/api/checkout').set('Origin', TEST_ORIGIN).set('Idempotency-Key', key).send({ paymentMethod: 'card', ...body });
+}
+
+/** What the developer picks on the fake's local test payment page; answers the page's response (a 303 back to the shop, or the page). */
+export async function onPaymentPage(paymentUrl: string, outcome: 'succeed' | 'decline' | 'abandon' | 'release' | 'return', event: 'now' | 'hold' = 'now') {
+  const res = await fetch(paymentUrl, { method: 'POST', redirect: 'manual', body: new URLSearchParams({ outcome, event }) });
+  return { status: res.status, location: res.headers.get('location'), html: await res.text() };
+}
+
+/** The buyer's browser lands back on the shop and the order page asks the server to check (or cancel) the payment. */
+export function backFromPaymentPage(agent: Agent, orderId: number, what: 'check' | 'cancel' = 'check') {
+  return agent.post(`/api/orders/${orderId}/payment-${what}`).set('Origin', TEST_ORIGIN).send({});
+}
+
+/**
+ * The whole happy path as a buyer does it: start the checkout, succeed on the test payment page,
+ * come back. Answers like the checkout did, with the order as it stands after the return.
+ */
+export async function pay(agent: Agent, body: Record<string, unknown>, key = newKey()) {
+  const started = await startCheckout(agent, body, key);
+  if (started.status >= 300 || !started.body.paymentUrl) return started;
+  await onPaymentPage(started.body.paymentUrl, 'succeed');
+  const back = await backFromPaymentPage(agent, started.body.orderId);
+  return { status: started.status, body: { ...started.body, order: back.body.order } };
+}
+
+/** Makes the fake post its signed events to this test's app (listening on a loopback port); call the returned stop() after. */
+export async function receiveProviderEvents(app: import('express').Express, secret: string) {
+  const server = await new Promise<import('node:http').Server>((resolve) => { const s = app.listen(0, '127.0.0.1', () => resolve(s)); });
+  const url = `http://127.0.0.1:${(server.address() as import('node:net').AddressInfo).port}/api/webhooks/payments`;
+  const fake = `http://127.0.0.1:${inject('stripePort')}/_local/webhook-endpoints`;
+  await fetch(fake, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ url, secret }) });
+  return {
+    url,
+    async stop() {
+      await fetch(fake, { method: 'DELETE', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ url }) });
+      server.closeAllConnections();
+      await new Promise((r) => server.close(() => r(null)));
+    },
+  };
 }
 
 /** Reads the payment fake directly, to count real charges. */

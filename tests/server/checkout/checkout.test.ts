@@ -5,7 +5,7 @@ import { createTestApp, waitForMail, type TestApp } from '../../helpers/test-app
 import { logRow, slabRow } from '../../helpers/fixtures';
 import { holds, orderLines, orders, payments, slabs } from '../../../server/db/schema/index';
 import { flushOutbox } from '../../../server/lib/outbox';
-import { chargesForOrder, hold, millSettingsRow, newKey, pay, windowFor, YARD_ADDRESS } from './checkout-fixtures';
+import { backFromPaymentPage, chargesForOrder, hold, millSettingsRow, newKey, onPaymentPage, pay, startCheckout, windowFor, YARD_ADDRESS } from './checkout-fixtures';
 
 let t: TestApp;
 let slot: Awaited<ReturnType<typeof windowFor>>;
@@ -59,41 +59,55 @@ describe('checkout', () => {
     expect(mail.html).toContain(a.code);
   });
 
-  it('when the card is declined, answers 402 and keeps the holds', async () => {
+  it('when the card is declined and the buyer turns back, nothing is sold, the holds stay and the attempt is not an order', async () => {
     const { buyer, slabs: [a], holds: [h] } = await buyerHolding();
-    const res = await pay(buyer.agent, { ...pickup(), cardToken: 'tok_chargeDeclined' });
-    expect(res.status).toBe(402);
-    expect(res.body.error.message).toBe('The card was declined. Your holds are kept — try another card.');
+    const started = await startCheckout(buyer.agent, { ...pickup(), loadingHelp: true });
+    expect(started.status).toBe(201);
+    const declined = await onPaymentPage(started.body.paymentUrl, 'decline');
+    expect(declined.status).toBe(402);
+    expect(declined.html).toContain('declined');
+    const back = await backFromPaymentPage(buyer.agent, started.body.orderId, 'cancel');
+    expect(back.body.order).toMatchObject({ status: 'abandoned', pickup: null, loadingHelp: false, paymentUrl: null });
     expect(await slabStatus(a.id)).toBe('held');
     const [kept] = await t.db.select().from(holds).where(eq(holds.id, h.id));
     expect(kept.status).toBe('active');
-    const failed = await t.db.select().from(orders).where(eq(orders.buyerId, buyer.id));
-    expect(failed.map((o) => o.status)).toEqual(['cancelled']);
+    expect((await buyer.agent.get('/api/orders')).body.orders).toEqual([]);
+    // The page was closed at the provider, so it can no longer be paid.
+    expect((await onPaymentPage(started.body.paymentUrl, 'succeed')).status).toBe(410);
 
     const retry = await pay(buyer.agent, pickup());
     expect(retry.status).toBe(201);
+    expect(retry.body.order.status).toBe('paid');
     expect(await slabStatus(a.id)).toBe('sold');
+    expect((await buyer.agent.get('/api/orders')).body.orders.map((o: { id: number }) => o.id)).toEqual([retry.body.order.id]);
   });
 
-  it('the same Idempotency-Key twice gives the same order and one charge', async () => {
+  it('the same Idempotency-Key twice gives the same attempt, one payment page and one charge', async () => {
     const { buyer } = await buyerHolding();
     const key = newKey();
-    const first = await pay(buyer.agent, pickup(), key);
-    const second = await pay(buyer.agent, pickup(), key);
+    const first = await startCheckout(buyer.agent, pickup(), key);
+    const second = await startCheckout(buyer.agent, pickup(), key);
     expect(first.status).toBe(201);
     expect(second.status).toBe(200);
-    expect(second.body.order.id).toBe(first.body.order.id);
-    expect(await t.db.select().from(payments).where(eq(payments.orderId, first.body.order.id))).toHaveLength(1);
-    expect(await chargesForOrder(t.db, first.body.order.id)).toHaveLength(1);
+    expect(second.body).toMatchObject({ orderId: first.body.orderId, paymentUrl: first.body.paymentUrl });
+    await onPaymentPage(first.body.paymentUrl, 'succeed');
+    await backFromPaymentPage(buyer.agent, first.body.orderId);
+    const third = await startCheckout(buyer.agent, pickup(), key);
+    expect(third.status).toBe(200);
+    expect(third.body.order.status).toBe('paid');
+    expect(await t.db.select().from(payments).where(eq(payments.orderId, first.body.orderId))).toHaveLength(1);
+    expect(await chargesForOrder(t.db, first.body.orderId)).toHaveLength(1);
   });
 
-  it('a double click (two requests at once with one key) makes one order and one charge', async () => {
+  it('a double click (two requests at once with one key) makes one attempt and one charge', async () => {
     const { buyer } = await buyerHolding();
     const key = newKey();
-    const both = await Promise.all([pay(buyer.agent, pickup(), key), pay(buyer.agent, pickup(), key)]);
+    const both = await Promise.all([startCheckout(buyer.agent, pickup(), key), startCheckout(buyer.agent, pickup(), key)]);
     expect(both.map((r) => r.status).sort()).toContain(201);
     const mine = await t.db.select().from(orders).where(eq(orders.buyerId, buyer.id));
     expect(mine).toHaveLength(1);
+    await onPaymentPage(both.find((r) => r.status === 201)!.body.paymentUrl, 'succeed');
+    await backFromPaymentPage(buyer.agent, mine[0].id);
     expect(await chargesForOrder(t.db, mine[0].id)).toHaveLength(1);
   });
 
@@ -129,9 +143,9 @@ describe('checkout', () => {
 
   it('refuses a checkout without an Idempotency-Key (400) and from a visitor (401)', async () => {
     const { buyer } = await buyerHolding();
-    const res = await buyer.agent.post('/api/checkout').set('Origin', 'http://localhost:3000').send({ ...pickup(), cardToken: 'tok_visa' });
+    const res = await buyer.agent.post('/api/checkout').set('Origin', 'http://localhost:3000').send({ ...pickup(), paymentMethod: 'card' });
     expect(res.status).toBe(400);
-    const visitor = await (await import('supertest')).default(t.app).post('/api/checkout').set('Idempotency-Key', newKey()).send({ ...pickup(), cardToken: 'tok_visa' });
+    const visitor = await (await import('supertest')).default(t.app).post('/api/checkout').set('Idempotency-Key', newKey()).send({ ...pickup(), paymentMethod: 'card' });
     expect(visitor.status).toBe(401);
   });
 });

@@ -10,3 +10,9 @@ export async function amountRefundedOnFake(chargeId: string) {
   const charge = await fakeProvider().charges.retrieve(chargeId);
   return charge.amount_refunded;
 }
+
+/** A real charge on the payment fake (as a completed payment page leaves one), for tests that refund it. */
+export async function chargeOnFake(amountCents: number, idempotencyKey: string) {
+  const c = await fakeProvider().charges.create({ amount: amountCents, currency: 'usd', source: 'tok_visa', description: 'test order' }, { idempotencyKey });
+  return { chargeId: c.id };
+}

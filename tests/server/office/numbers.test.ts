@@ -2,8 +2,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
 import { logRow, slabRow } from '../../helpers/fixtures';
-import { orderLines } from '../../../server/db/schema/index';
+import { orderLines, payments, refundLines } from '../../../server/db/schema/index';
 import { paidOrderRow } from './order-fixtures';
+import type { MillNumbers } from '../../../shared/office';
 
 let t: TestApp;
 
@@ -24,18 +25,23 @@ describe('GET /api/office/numbers', () => {
     await slabRow(t.db, oakLog, { status: 'held' });
     await paidOrderRow(t.db, buyer.id, [w1, o1], { paidAt: new Date('2024-05-10T15:00:00Z') });
     const june = await paidOrderRow(t.db, buyer.id, [w2, refunded], { paidAt: new Date('2024-06-02T10:00:00Z') });
-    await t.db.update(orderLines).set({ status: 'refunded' }).where(eq(orderLines.slabId, refunded.id));
+    // The oak slab of June came back: its line is refunded and the refund's money is recorded against it.
+    const [line] = await t.db.update(orderLines).set({ status: 'refunded' }).where(eq(orderLines.slabId, refunded.id)).returning();
+    const [refundRow] = await t.db.insert(payments).values({ orderId: june.id, kind: 'refund', amountCents: refunded.priceCents, status: 'succeeded' }).returning();
+    await t.db.insert(refundLines).values({ paymentId: refundRow.id, orderLineId: line.id, woodCents: refunded.priceCents, servicesCents: 0, taxCents: 0 });
     // An unpaid order must not count.
     const unpaidSlab = await slabRow(t.db, walnutLog);
     await paidOrderRow(t.db, buyer.id, [unpaidSlab], { status: 'pending-payment', paidAt: null });
 
     const res = await admin.agent.get('/api/office/numbers');
     expect(res.status).toBe(200);
-    const sales = res.body.sales as Array<{ month: string; speciesName: string; boardFeet: number; revenueCents: number; slabs: number }>;
+    const sales = res.body.sales as MillNumbers['sales'];
     expect(sales.map((s) => [s.month, s.speciesName, s.boardFeet, s.slabs])).toEqual([
-      ['2024-05', 'Black walnut', 18, 1], ['2024-05', 'White oak', 40, 1], ['2024-06', 'Black walnut', 24, 1],
+      ['2024-05', 'Black walnut', 18, 1], ['2024-05', 'White oak', 40, 1], ['2024-06', 'Black walnut', 24, 1], ['2024-06', 'White oak', 0, 0],
     ]);
     expect(sales[0].revenueCents).toBe(w1.priceCents);
+    // The refunded slab was sold and paid for, then refunded in full: it nets to nothing in its sale's month.
+    expect(sales[3]).toMatchObject({ woodCents: refunded.priceCents, refundedWoodCents: refunded.priceCents, revenueCents: 0 });
     expect(june.id).toBeGreaterThan(0);
 
     const counts = Object.fromEntries((res.body.statusCounts as Array<{ status: string; count: number }>).map((c) => [c.status, c.count]));

@@ -5,7 +5,7 @@ import { createTestApp, TEST_ORIGIN, waitForMail, type TestApp } from '../../hel
 import { logRow, slabRow } from '../../helpers/fixtures';
 import { auditLog, closedDays, millSettings, orders, payments } from '../../../server/db/schema/index';
 import { paidOrderRow, pickupWindowRow, slabStatus } from './order-fixtures';
-import { amountRefundedOnFake } from './fake-provider';
+import { amountRefundedOnFake, chargeOnFake } from './fake-provider';
 
 let t: TestApp;
 let admin: Awaited<ReturnType<TestApp['signedInAs']>>;
@@ -28,7 +28,7 @@ async function orderOn(day: string, over: Partial<typeof orders.$inferInsert> = 
   const window = await pickupWindowRow(t.db, { weekday: weekdayOf(day), startsAt: '00:00', endsAt: '23:59', capacity });
   const log = await logRow(t.db, 'white-oak');
   const slab = await slabRow(t.db, log, { thicknessIn: 2.5, widthsIn: [26], lengthIn: 110 });
-  const charge = await t.payments.charge({ amountCents: slab.priceCents, source: 'tok_visa', idempotencyKey: `pickup-test-${Date.now()}-${++seq}`, description: 'test' });
+  const charge = await chargeOnFake(slab.priceCents, `pickup-test-${Date.now()}-${++seq}`);
   const order = await paidOrderRow(t.db, buyer.id, [slab], { pickupOn: day, pickupWindowId: window.id, chargeId: charge.chargeId, loadingHelp: true, ...over });
   return { order, slab, window, chargeId: charge.chargeId };
 }

@@ -5,7 +5,7 @@ import { createTestApp, TEST_ORIGIN, waitForMail, type TestApp } from '../../hel
 import { logRow, slabRow } from '../../helpers/fixtures';
 import { auditLog, orderLines, orders, payments } from '../../../server/db/schema/index';
 import { paidOrderRow, slabStatus } from './order-fixtures';
-import { amountRefundedOnFake } from './fake-provider';
+import { amountRefundedOnFake, chargeOnFake } from './fake-provider';
 
 let t: TestApp;
 let admin: Awaited<ReturnType<TestApp['signedInAs']>>;
@@ -26,7 +26,7 @@ async function paidOrder() {
   const a = await slabRow(t.db, log, { thicknessIn: 2, widthsIn: [20], lengthIn: 72 });
   const b = await slabRow(t.db, log, { thicknessIn: 2, widthsIn: [16], lengthIn: 60 });
   const amount = a.priceCents + b.priceCents;
-  const charge = await t.payments.charge({ amountCents: amount, source: 'tok_visa', idempotencyKey: key(), description: 'test order' });
+  const charge = await chargeOnFake(amount, key());
   const order = await paidOrderRow(t.db, buyer.id, [a, b], { chargeId: charge.chargeId });
   return { order, a, b, chargeId: charge.chargeId };
 }

@@ -16,13 +16,11 @@ import { Length } from '../../../lib/units';
 import { newIdempotencyKey, pickupSlotsQuery, useCheckout } from '../api';
 import { LoadingAdvicePanel } from './loading-advice-panel';
 import { SlotPicker } from './slot-picker';
-import { TestCardChooser } from './test-card-chooser';
 
 const formSchema = z.object({
   slot: z.string({ error: 'Choose a pickup time' }).min(1, 'Choose a pickup time'),
   flatten: z.array(z.string()),
   loadingHelp: z.boolean(),
-  cardToken: z.string({ error: 'Choose a test card' }).min(1, 'Choose a test card'),
 });
 type FormValues = z.infer<typeof formSchema>;
 
@@ -34,7 +32,7 @@ export function CheckoutPage({ holds }: { holds: HoldView[] }) {
   const attemptKey = useRef(newIdempotencyKey());
   const { register, handleSubmit, watch, setError, formState: { errors } } = useForm<FormValues>({
     resolver: zodResolver(formSchema),
-    defaultValues: { slot: '', flatten: [], loadingHelp: false, cardToken: 'tok_visa' },
+    defaultValues: { slot: '', flatten: [], loadingHelp: false },
   });
   const flatten = (watch('flatten') ?? []).map(Number);
   const loadingHelp = watch('loadingHelp');
@@ -49,9 +47,10 @@ export function CheckoutPage({ holds }: { holds: HoldView[] }) {
   const onSubmit = (v: FormValues) => {
     const [windowId, pickupOn] = v.slot.split('|');
     pay.mutate(
-      { key: attemptKey.current, input: { holdIds: holds.map((h) => h.id), pickupWindowId: Number(windowId), pickupOn, withFlattening: v.flatten.map(Number), loadingHelp: v.loadingHelp, cardToken: v.cardToken } },
+      { key: attemptKey.current, input: { holdIds: holds.map((h) => h.id), pickupWindowId: Number(windowId), pickupOn, withFlattening: v.flatten.map(Number), loadingHelp: v.loadingHelp, paymentMethod: 'card' } },
       {
-        onSuccess: ({ order }) => navigate(paths.order(order.id)),
+        // Card details are typed on the payment page, never here: the browser goes there next.
+        onSuccess: ({ orderId, paymentUrl }) => (paymentUrl ? window.location.assign(paymentUrl) : navigate(paths.order(orderId))),
         onError: (err) => {
           // The server answered, so this attempt is over: the next press is a new attempt.
           if (err instanceof ApiError) attemptKey.current = newIdempotencyKey();
@@ -101,13 +100,13 @@ export function CheckoutPage({ holds }: { holds: HoldView[] }) {
       </label>
       {advice && <LoadingAdvicePanel advice={advice} loadingHelp={loadingHelp} />}
 
-      <TestCardChooser field={register('cardToken')} error={errors.cardToken?.message} />
+      <p className="text-sm text-ink-soft">You pay by card on the payment service's secure page; Stickerline never sees your card number. Coming back without paying keeps your holds.</p>
 
       <div className="flex flex-col gap-2 border-t border-line pt-3">
         <p>Slabs {formatCents(slabsTotal)}{services > 0 && <> · flattening {formatCents(services)}</>}</p>
         <p className="text-xl">Total <strong>{formatCents(slabsTotal + services)}</strong></p>
         {pay.error && <Notice tone="danger" role="alert">{friendlyMessage(pay.error)}</Notice>}
-        <Button type="submit" disabled={pay.isPending} className="self-start">{pay.isPending ? 'Paying…' : `Pay ${formatCents(slabsTotal + services)}`}</Button>
+        <Button type="submit" disabled={pay.isPending || pay.isSuccess} className="self-start">{pay.isPending || pay.isSuccess ? 'Opening the payment page…' : `Go to payment — ${formatCents(slabsTotal + services)}`}</Button>
       </div>
     </form>
   );

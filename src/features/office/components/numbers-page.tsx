@@ -1,15 +1,16 @@
 import { useQuery } from '@tanstack/react-query';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { PageTitle } from '../../../components/ui/page-title';
-import { formatCents, formatDays, plainNumber } from '../../../../shared/wood/index';
-import type { MillNumbers } from '../../../../shared/office';
-import { SLAB_STATUSES, SLAB_STATUS_LABELS, type SlabStatus } from '../../../../shared/slabs';
+import { formatCents, plainNumber } from '../../../../shared/wood/index';
+import type { MillNumbers, SalesMoney } from '../../../../shared/office';
 import { numbersQuery } from '../api';
 
 // Species colours picked from the theme's wood tones so the stacks stay readable side by side.
 const PALETTE = ['#7a4a24', '#4f6b3a', '#b7832f', '#8c3b2e', '#3f5f6e', '#a0662e', '#5d4a6b', '#6f7d44'];
-const CHARTED_STATUSES: SlabStatus[] = ['drying', 'ready', 'listed', 'held'];
-const statusWords = (s: string) => (SLAB_STATUSES as readonly string[]).includes(s) ? SLAB_STATUS_LABELS[s as SlabStatus] : s;
+const STATUS_LABELS: Record<string, string> = {
+  drying: 'Drying', ready: 'Dry, not listed', listed: 'On sale', held: 'On hold', sold: 'Sold, waiting', 'picked-up': 'Collected', withdrawn: 'Withdrawn',
+};
+const CHARTED_STATUSES = ['drying', 'ready', 'listed', 'held'];
 
 /** One row per month with one column per species: the shape a stacked bar chart wants. */
 function byMonth(sales: MillNumbers['sales'], field: 'boardFeet' | 'revenueCents') {
@@ -24,14 +25,14 @@ export function NumbersPage() {
   const { data } = useQuery(numbersQuery());
   if (!data) return null;
   const species = [...new Set(data.sales.map((s) => s.speciesName))].sort();
-  const counts = CHARTED_STATUSES.map((s) => ({ status: SLAB_STATUS_LABELS[s], count: data.statusCounts.find((c) => c.status === s)?.count ?? 0 }));
+  const counts = CHARTED_STATUSES.map((s) => ({ status: STATUS_LABELS[s], count: data.statusCounts.find((c) => c.status === s)?.count ?? 0 }));
   return (
     <div className="flex flex-col gap-6">
       <PageTitle>The mill's numbers</PageTitle>
       <p className="text-lg">
         {data.averageDaysMilledToSold === null
           ? 'No sold slab has a milling date yet.'
-          : `On average a slab sold ${formatDays(data.averageDaysMilledToSold)} after its log was milled (over ${data.soldSlabsWithMillDate} sold slabs).`}
+          : `On average a slab sold ${data.averageDaysMilledToSold} days after its log was milled (over ${data.soldSlabsWithMillDate} sold slabs).`}
       </p>
       <ChartBox title="Board feet sold per month, by species">
         <BarChart data={byMonth(data.sales, 'boardFeet')}>
@@ -39,7 +40,7 @@ export function NumbersPage() {
           {species.map((s, i) => <Bar key={s} dataKey={s} stackId="bf" fill={PALETTE[i % PALETTE.length]} />)}
         </BarChart>
       </ChartBox>
-      <ChartBox title="Revenue per month (dollars), by species">
+      <ChartBox title="Revenue per month, net of refunds (dollars), by species">
         <BarChart data={byMonth(data.sales, 'revenueCents')}>
           <CartesianGrid strokeDasharray="3 3" /><XAxis dataKey="month" /><YAxis /><Tooltip /><Legend />
           {species.map((s, i) => <Bar key={s} dataKey={s} stackId="rev" fill={PALETTE[i % PALETTE.length]} />)}
@@ -106,16 +107,20 @@ function NumbersTables({ data }: { data: MillNumbers }) {
     <section aria-labelledby="numbers-table-h" className="flex flex-col gap-4">
       <h2 id="numbers-table-h" className="font-display text-lg font-bold">The same numbers as tables</h2>
       <div className="overflow-x-auto">
-        <table className="w-full min-w-[28rem] text-left text-sm">
-          <caption className="text-left font-semibold">Sold per month and species</caption>
-          <thead><tr className="border-b border-line"><th scope="col">Month</th><th scope="col">Species</th><th scope="col">Slabs</th><th scope="col">Board feet</th><th scope="col">Revenue</th></tr></thead>
+        <table className="w-full min-w-[44rem] text-left text-sm">
+          <caption className="text-left font-semibold">Sold per month and species (refunds count against the month of the sale)</caption>
+          <thead><tr className="border-b border-line"><th scope="col">Month</th><th scope="col">Species</th><th scope="col">Slabs</th><th scope="col">Board feet</th><th scope="col">Wood</th><th scope="col">Services</th><th scope="col">Refunded</th><th scope="col">Revenue (net)</th><th scope="col">Sales tax (net)</th></tr></thead>
           <tbody>
             {data.sales.map((s) => (
               <tr key={`${s.month}-${s.speciesName}`} className="border-b border-line/60">
-                <td>{s.month}</td><td>{s.speciesName}</td><td>{s.slabs}</td><td>{plainNumber(s.boardFeet, 2)}</td><td>{formatCents(s.revenueCents)}</td>
+                <td>{s.month}</td><td>{s.speciesName}</td><td>{s.slabs}</td><td>{plainNumber(s.boardFeet, 2)}</td>
+                <MoneyCells m={s} />
               </tr>
             ))}
-            {!data.sales.length && <tr><td colSpan={5}>Nothing sold yet.</td></tr>}
+            {data.sales.length > 0 && (
+              <tr className="font-semibold"><th scope="row" colSpan={4}>All months</th><MoneyCells m={data.totals} /></tr>
+            )}
+            {!data.sales.length && <tr><td colSpan={9}>Nothing sold yet.</td></tr>}
           </tbody>
         </table>
       </div>
@@ -123,9 +128,19 @@ function NumbersTables({ data }: { data: MillNumbers }) {
         <caption className="text-left font-semibold">Slabs by state</caption>
         <thead><tr className="border-b border-line"><th scope="col">State</th><th scope="col">Slabs</th></tr></thead>
         <tbody>
-          {data.statusCounts.map((c) => <tr key={c.status} className="border-b border-line/60"><td>{statusWords(c.status)}</td><td>{c.count}</td></tr>)}
+          {data.statusCounts.map((c) => <tr key={c.status} className="border-b border-line/60"><td>{STATUS_LABELS[c.status] ?? c.status}</td><td>{c.count}</td></tr>)}
         </tbody>
       </table>
     </section>
+  );
+}
+
+function MoneyCells({ m }: { m: SalesMoney }) {
+  const refunded = m.refundedWoodCents + m.refundedServicesCents + m.refundedTaxCents;
+  return (
+    <>
+      <td>{formatCents(m.woodCents)}</td><td>{formatCents(m.servicesCents)}</td><td>{refunded ? `−${formatCents(refunded)}` : formatCents(0)}</td>
+      <td>{formatCents(m.revenueCents)}</td><td>{formatCents(m.netTaxCents)}</td>
+    </>
   );
 }

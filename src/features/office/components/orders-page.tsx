@@ -6,7 +6,7 @@ import { Button } from '../../../components/ui/button';
 import { Tag } from '../../../components/ui/tag';
 import { paths } from '../../../paths';
 import { formatCents } from '../../../../shared/wood/index';
-import { ORDER_STATUSES, type OrderStatus } from '../../../../shared/office';
+import { ORDER_STATUSES, isAttempt, type OrderStatus } from '../../../../shared/office';
 import { ordersQuery } from '../api';
 import { ORDER_STATUS_LABELS } from '../../../../shared/office';
 
@@ -25,8 +25,13 @@ export function OrdersPage() {
       <Form method="get" className="grid gap-3 sm:grid-cols-[1fr_14rem_auto] sm:items-end">
         <TextField label="Search" name="q" defaultValue={filters.q} hint="Order code, buyer name or e-mail, or slab code" />
         <SelectField label="State" name="status" defaultValue={filters.status ?? ''}>
-          <option value="">Any</option>
-          {ORDER_STATUSES.map((s) => <option key={s} value={s}>{ORDER_STATUS_LABELS[s]}</option>)}
+          <option value="">Any order (paid at some point)</option>
+          <optgroup label="Orders">
+            {ORDER_STATUSES.filter((s) => !isAttempt(s)).map((s) => <option key={s} value={s}>{ORDER_STATUS_LABELS[s]}</option>)}
+          </optgroup>
+          <optgroup label="Payment attempts (not orders)">
+            {ORDER_STATUSES.filter(isAttempt).map((s) => <option key={s} value={s}>{ORDER_STATUS_LABELS[s]}</option>)}
+          </optgroup>
         </SelectField>
         <Button type="submit">Show</Button>
       </Form>

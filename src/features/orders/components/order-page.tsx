@@ -9,6 +9,7 @@ import { ORDER_STATUS_LABELS, type OrderView } from '../../../../shared/checkout
 import { formatCents } from '../../../../shared/wood/index';
 import { BoardFeet, Length, Weight } from '../../../lib/units';
 import { orderQuery } from '../api';
+import { PaymentState } from './payment-state';
 
 /** One order: lines with their price breakdown, pickup details and (through a slot) what to bring. */
 export function OrderPage({ bring }: { bring?: (order: OrderView) => ReactNode }) {
@@ -20,17 +21,19 @@ export function OrderPage({ bring }: { bring?: (order: OrderView) => ReactNode }
       <nav className="text-sm"><Link to={paths.orders()} className="text-accent underline">Your orders</Link> / {order.code}</nav>
       <div className="flex flex-wrap items-center gap-3">
         <PageTitle title={`Order ${order.code}`}>Order {order.code}</PageTitle>
-        <Tag tone={order.status === 'paid' ? 'moss' : 'accent'}>{ORDER_STATUS_LABELS[order.status]}</Tag>
+        <Tag tone={order.status === 'paid' ? 'moss' : order.status === 'abandoned' ? 'neutral' : 'accent'}>{ORDER_STATUS_LABELS[order.status]}</Tag>
       </div>
-      {order.status === 'paid' && <Notice tone="success" role="status">Paid — a confirmation is on its way by e-mail.</Notice>}
+      <PaymentState order={order} />
       {order.refundedCents > 0 && <Notice>Refunded so far: {formatCents(order.refundedCents)}.</Notice>}
 
-      <section aria-labelledby="pickup-heading" className="rounded-md border border-line bg-surface-raised p-4">
-        <h2 id="pickup-heading" className="text-lg font-bold">Pickup</h2>
-        <p>{order.pickup.on ? <><strong>{order.pickup.on}</strong>, {order.pickup.startsAt}–{order.pickup.endsAt}</> : 'Not booked'}</p>
-        {order.pickup.yardAddress && <p>At the yard: {order.pickup.yardAddress}</p>}
-        <p>{order.loadingHelp ? 'The yard crew will help you load.' : 'No loading help asked for.'}</p>
-      </section>
+      {order.pickup && (
+        <section aria-labelledby="pickup-heading" className="rounded-md border border-line bg-surface-raised p-4">
+          <h2 id="pickup-heading" className="text-lg font-bold">Pickup</h2>
+          <p>{order.pickup.on ? <><strong>{order.pickup.on}</strong>, {order.pickup.startsAt}–{order.pickup.endsAt}</> : 'Not booked'}</p>
+          {order.pickup.yardAddress && <p>At the yard: {order.pickup.yardAddress}</p>}
+          <p>{order.loadingHelp ? 'The yard crew will help you load.' : 'No loading help asked for.'}</p>
+        </section>
+      )}
 
       <section aria-labelledby="lines-heading" className="flex flex-col gap-3">
         <h2 id="lines-heading" className="text-lg font-bold">Slabs</h2>
@@ -51,7 +54,7 @@ export function OrderPage({ bring }: { bring?: (order: OrderView) => ReactNode }
             </table>
           </div>
         ))}
-        <p className="text-right">Slabs {formatCents(order.slabsCents)}{order.servicesCents > 0 && <> · services {formatCents(order.servicesCents)}</>} · <strong>Total {formatCents(order.totalCents)}</strong></p>
+        <p className="text-right">Slabs {formatCents(order.slabsCents)}{order.servicesCents > 0 && <> · services {formatCents(order.servicesCents)}</>} · sales tax {formatCents(order.taxCents)} · <strong>Total {formatCents(order.totalCents)}</strong></p>
       </section>
       {bring?.(order)}
     </article>

@@ -21,11 +21,11 @@ export function OrdersPage() {
                 <Link to={paths.order(o.id)} className="font-semibold text-accent underline">Order {o.code}</Link>
                 <p className="text-sm text-ink-soft">
                   {o.slabCount} {o.slabCount === 1 ? 'slab' : 'slabs'}
-                  {o.pickup.on && ` · pickup ${o.pickup.on} ${o.pickup.startsAt}–${o.pickup.endsAt}`}
+                  {o.pickup?.on && ` · pickup ${o.pickup.on} ${o.pickup.startsAt}–${o.pickup.endsAt}`}
                 </p>
               </div>
               <div className="flex items-center gap-3">
-                <Tag tone={o.status === 'paid' ? 'moss' : o.status === 'cancelled' ? 'neutral' : 'accent'}>{ORDER_STATUS_LABELS[o.status]}</Tag>
+                <Tag tone={o.status === 'paid' ? 'moss' : o.status === 'cancelled' || o.status === 'abandoned' ? 'neutral' : 'accent'}>{ORDER_STATUS_LABELS[o.status]}</Tag>
                 <strong>{formatCents(o.totalCents)}</strong>
               </div>
             </li>
