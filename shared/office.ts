@@ -5,6 +5,14 @@ import { ATTEMPT_STATUSES, ORDER_STATUSES, isAttempt, type OrderStatus } from '.
 
 export const USER_ROLES = ['buyer', 'seller', 'admin'] as const;
 export type UserRole = (typeof USER_ROLES)[number];
+/** A role in Stickerline's words; "buyer" is the one word for the people who buy (never "customer"). */
+export const USER_ROLE_LABELS: Record<UserRole, string> = { buyer: 'Buyer', seller: 'Yard staff', admin: 'Office' };
+/** What a role lets a person do, said before the office changes it. */
+export const USER_ROLE_DESCRIPTIONS: Record<UserRole, string> = {
+  buyer: 'They can reserve and buy slabs, and nothing more.',
+  seller: 'They can record logs, slabs, photos and readings at the yard desk.',
+  admin: 'They can run pickups, refunds, holds, prices and everyone\'s roles.',
+};
 
 const emptyToUndefined = (raw: Record<string, unknown>) =>
   Object.fromEntries(Object.entries(raw).map(([k, v]) => [k, v === '' ? undefined : v]));
@@ -53,6 +61,7 @@ export type AuditPage = { items: AuditEntryView[]; total: number; page: number; 
 // --- orders & refunds ------------------------------------------------------------------------
 // One list of order states for both sides; attempts (pending-payment, abandoned) are listed only when asked for.
 export { ORDER_STATUSES, ATTEMPT_STATUSES, isAttempt, type OrderStatus };
+export { ORDER_STATUS_LABELS } from './checkout';
 
 export const orderListQuerySchema = z.object({
   status: z.enum(ORDER_STATUSES, { error: 'Unknown order status' }).optional(),
@@ -105,6 +114,8 @@ export const rescheduleSchema = z.object({
 export type RescheduleInput = z.infer<typeof rescheduleSchema>;
 
 export type PickupOrder = {
+  /** The booked window has begun at the mill: only then can the office record that the buyer did not come. */
+  pickupStarted: boolean;
   id: number; code: string; status: OrderStatus; buyerName: string; buyerEmail: string; slabCodes: string[];
   totalWeightLb: number; longestSlabIn: number; loadingHelp: boolean; pickedUpAt: string | null;
 };
