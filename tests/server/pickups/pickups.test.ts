@@ -7,6 +7,7 @@ import { auditLog, closedDays, orders, pickupWindows } from '../../../server/db/
 import { listPickupSlots } from '../../../server/modules/pickups/pickups.service';
 import { queuePickupReminders } from '../../../server/modules/checkout/pickup-reminders';
 import { flushOutbox } from '../../../server/lib/outbox';
+import { formatDay } from '../../../shared/dates';
 import { daysFromNow, hold, millSettingsRow, pay, weekdayOf, windowFor, YARD_ADDRESS } from '../checkout/checkout-fixtures';
 
 let t: TestApp;
@@ -114,6 +115,7 @@ describe('pickup reminders', () => {
     await flushOutbox(t.db, t.mailer);
     const mail = await waitForMail(buyer.email, (m) => m.subject.startsWith('Tomorrow'));
     expect(mail.text).toContain(slab.code);
-    expect(mail.text).toContain(`${day}, 09:00–12:00`);
+    // Dates are written one way for people (shared/dates.ts): "Sat 5 Dec 2026".
+    expect(mail.text).toContain(`${formatDay(day)}, 09:00–12:00`);
   });
 });

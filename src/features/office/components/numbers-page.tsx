@@ -3,14 +3,12 @@ import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAx
 import { PageTitle } from '../../../components/ui/page-title';
 import { formatCents, plainNumber } from '../../../../shared/wood/index';
 import type { MillNumbers, SalesMoney } from '../../../../shared/office';
+import { SLAB_STATUS_LABELS, type SlabStatus } from '../../../../shared/slabs';
 import { numbersQuery } from '../api';
 
 // Species colours picked from the theme's wood tones so the stacks stay readable side by side.
 const PALETTE = ['#7a4a24', '#4f6b3a', '#b7832f', '#8c3b2e', '#3f5f6e', '#a0662e', '#5d4a6b', '#6f7d44'];
-const STATUS_LABELS: Record<string, string> = {
-  drying: 'Drying', ready: 'Dry, not listed', listed: 'On sale', held: 'On hold', sold: 'Sold, waiting', 'picked-up': 'Collected', withdrawn: 'Withdrawn',
-};
-const CHARTED_STATUSES = ['drying', 'ready', 'listed', 'held'];
+const CHARTED_STATUSES: SlabStatus[] = ['drying', 'ready', 'listed', 'held'];
 
 /** One row per month with one column per species: the shape a stacked bar chart wants. */
 function byMonth(sales: MillNumbers['sales'], field: 'boardFeet' | 'revenueCents') {
@@ -25,7 +23,7 @@ export function NumbersPage() {
   const { data } = useQuery(numbersQuery());
   if (!data) return null;
   const species = [...new Set(data.sales.map((s) => s.speciesName))].sort();
-  const counts = CHARTED_STATUSES.map((s) => ({ status: STATUS_LABELS[s], count: data.statusCounts.find((c) => c.status === s)?.count ?? 0 }));
+  const counts = CHARTED_STATUSES.map((s) => ({ status: SLAB_STATUS_LABELS[s], count: data.statusCounts.find((c) => c.status === s)?.count ?? 0 }));
   return (
     <div className="flex flex-col gap-6">
       <PageTitle>The mill's numbers</PageTitle>
