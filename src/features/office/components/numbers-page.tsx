@@ -126,7 +126,7 @@ function NumbersTables({ data }: { data: MillNumbers }) {
         <caption className="text-left font-semibold">Slabs by state</caption>
         <thead><tr className="border-b border-line"><th scope="col">State</th><th scope="col">Slabs</th></tr></thead>
         <tbody>
-          {data.statusCounts.map((c) => <tr key={c.status} className="border-b border-line/60"><td>{STATUS_LABELS[c.status] ?? c.status}</td><td>{c.count}</td></tr>)}
+          {data.statusCounts.map((c) => <tr key={c.status} className="border-b border-line/60"><td>{SLAB_STATUS_LABELS[c.status as SlabStatus] ?? c.status}</td><td>{c.count}</td></tr>)}
         </tbody>
       </table>
     </section>
